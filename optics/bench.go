@@ -1,0 +1,181 @@
+package optics
+
+// FormatBenchV1 is the value of Bench.Format for version 1 of the bench file.
+const FormatBenchV1 = "raytable/bench/v1"
+
+// MaxElements is the largest number of elements a bench may hold.
+const MaxElements = 200
+
+// Element types.
+const (
+	TypeLens     = "lens"      // one or more refracting faces with glass between them
+	TypeThinLens = "thin-lens" // an ideal lens of given focal length at one plane
+	TypeMirror   = "mirror"    // a flat or spherical mirror that turns the beam on the table
+	TypeAperture = "aperture"  // an iris or slit of given clear diameter
+	TypeScreen   = "screen"    // a detector or viewing card: records rays, stops nothing
+	TypeDump     = "dump"      // a beam dump: the end of the beam
+)
+
+// Source kinds.
+const (
+	SourceCollimated = "collimated"
+	SourcePoint      = "point"
+)
+
+// Table grids.
+const (
+	GridMetric25  = "metric-25mm"
+	GridImperial1 = "imperial-1in"
+	GridNone      = "none"
+)
+
+// DefaultFanRays is the number of rays in each meridional fan when the source does not say.
+const DefaultFanRays = 21
+
+// Bench is one optical setup: a source and a list of elements in beam order on a table.
+// It is the Go form of the bench file (format raytable/bench/v1); see Decode for the rules.
+type Bench struct {
+	Format        string                  `json:"format"`
+	Title         string                  `json:"title,omitempty"`
+	Notes         string                  `json:"notes,omitempty"`
+	WavelengthsNM []float64               `json:"wavelengths_nm"`
+	Table         Table                   `json:"table"`
+	Source        Source                  `json:"source"`
+	Materials     map[string]MaterialSpec `json:"materials,omitempty"`
+	Elements      []Element               `json:"elements"`
+}
+
+// PrimaryWavelengthNM is the first wavelength, the one system values are given at.
+func (b *Bench) PrimaryWavelengthNM() float64 { return b.WavelengthsNM[0] }
+
+// Table is the breadboard the bench is built on. x runs along the width, y along the depth,
+// origin at the front-left corner.
+type Table struct {
+	Grid         string   `json:"grid"`
+	WidthMM      float64  `json:"width_mm"`
+	DepthMM      float64  `json:"depth_mm"`
+	BeamHeightMM float64  `json:"beam_height_mm"`
+	HoleOffsetMM *float64 `json:"hole_offset_mm,omitempty"` // first hole from the front and left edges; default by grid
+}
+
+// Source is where light enters the bench.
+type Source struct {
+	XMM        float64 `json:"x_mm"`
+	YMM        float64 `json:"y_mm"`
+	HeadingDeg float64 `json:"heading_deg"` // 0 = +x, 90 = +y, counter-clockwise seen from above
+	Kind       string  `json:"kind"`
+
+	SemiDiameterMM *float64  `json:"semi_diameter_mm,omitempty"` // collimated: radius of the bundle
+	FieldAnglesDeg []float64 `json:"field_angles_deg,omitempty"` // collimated: field angles in the table plane
+
+	NA              *float64  `json:"na,omitempty"`                // point: numerical aperture of the traced cone
+	ObjectHeightsMM []float64 `json:"object_heights_mm,omitempty"` // point: object heights in the table plane
+
+	FanRays *int          `json:"fan_rays,omitempty"` // rays per meridional fan; DefaultFanRays when absent
+	Rays    []ExplicitRay `json:"rays,omitempty"`
+	Beam    *Beam         `json:"beam,omitempty"`
+}
+
+// FanRayCount is the number of rays in each fan.
+func (s *Source) FanRayCount() int {
+	if s.FanRays == nil {
+		return DefaultFanRays
+	}
+	return *s.FanRays
+}
+
+// ExplicitRay is one ray the user asked to follow, starting at the source plane.
+// height/angle are in the table plane (y), x_mm/x_angle_deg vertical.
+type ExplicitRay struct {
+	HeightMM  float64 `json:"height_mm"`
+	AngleDeg  float64 `json:"angle_deg"`
+	XMM       float64 `json:"x_mm"`
+	XAngleDeg float64 `json:"x_angle_deg"`
+}
+
+// Beam is an optional Gaussian laser beam leaving the source.
+type Beam struct {
+	WaistRadiusMM float64  `json:"waist_radius_mm"` // 1/e² intensity radius of the real beam at its waist
+	WaistAtMM     float64  `json:"waist_at_mm"`     // waist position along the path from the source; negative is upstream
+	M2            *float64 `json:"m2,omitempty"`    // beam quality factor; 1 when absent
+}
+
+// BeamQuality is M², 1 when not given.
+func (b *Beam) BeamQuality() float64 {
+	if b.M2 == nil {
+		return 1
+	}
+	return *b.M2
+}
+
+// MaterialSpec is a user-defined medium. Exactly one of Sellmeier, (ND and VD), Index is set.
+type MaterialSpec struct {
+	Sellmeier *SellmeierSpec `json:"sellmeier,omitempty"`
+	RangeNM   []float64      `json:"range_nm,omitempty"` // [low, high] validity range of the Sellmeier fit
+	ND        *float64       `json:"nd,omitempty"`
+	VD        *float64       `json:"vd,omitempty"`
+	Index     *float64       `json:"index,omitempty"`
+}
+
+// SellmeierSpec holds n² = 1 + Σ B_i λ² / (λ² - C_i), λ in micrometres.
+type SellmeierSpec struct {
+	B    []float64 `json:"b"`
+	CUM2 []float64 `json:"c_um2"`
+}
+
+// Element is one item on the bench. Which fields are allowed depends on Type; see Decode.
+type Element struct {
+	ID    string  `json:"id"`
+	Type  string  `json:"type"`
+	GapMM float64 `json:"gap_mm"` // from the previous element's last vertex (or the source) to this one's first vertex
+
+	// lens
+	FacesMM       []*float64 `json:"faces_mm,omitempty"`       // face radii, + when the centre is downstream, nil flat
+	ThicknessesMM []float64  `json:"thicknesses_mm,omitempty"` // centre thicknesses between faces
+	Materials     []string   `json:"materials,omitempty"`      // media between faces
+
+	// thin-lens
+	FocalMM *float64 `json:"focal_mm,omitempty"`
+
+	// mirror
+	RadiusMM *float64 `json:"radius_mm,omitempty"` // + concave, - convex, nil flat
+	TurnDeg  *float64 `json:"turn_deg,omitempty"`  // heading change, + counter-clockwise, magnitude in (0, 180]
+
+	// lens, thin-lens, mirror, aperture
+	DiameterMM *float64 `json:"diameter_mm,omitempty"` // clear aperture; nil unlimited
+
+	// screen
+	WidthMM *float64 `json:"width_mm,omitempty"`
+
+	// any type: footprint of the mount on the table
+	Mount *Mount `json:"mount,omitempty"`
+}
+
+// Mount is a mount's footprint on the table, centred on the element and aligned with the beam:
+// width across the beam, depth along it.
+type Mount struct {
+	WidthMM float64 `json:"width_mm"`
+	DepthMM float64 `json:"depth_mm"`
+}
+
+// IsOptical reports whether the element bends light (lens, thin lens, mirror).
+func (e *Element) IsOptical() bool {
+	return e.Type == TypeLens || e.Type == TypeThinLens || e.Type == TypeMirror
+}
+
+// LengthMM is the distance from the element's first vertex to its last along the beam.
+func (e *Element) LengthMM() float64 {
+	var t float64
+	for _, d := range e.ThicknessesMM {
+		t += d
+	}
+	return t
+}
+
+// SemiDiameterMM is half the clear aperture, or +Inf when the element has none.
+func (e *Element) SemiDiameterMM() float64 {
+	if e.DiameterMM == nil {
+		return inf
+	}
+	return *e.DiameterMM / 2
+}

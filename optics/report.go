@@ -1,0 +1,207 @@
+package optics
+
+// FormatReportV1 is the value of Report.Format.
+const FormatReportV1 = "raytable/report/v1"
+
+// Report is everything raytable computes for one bench. Its JSON form is the report of
+// `raytable report --json` and of GET /r/{id}/report.json; the names are a public interface.
+// Optional numbers are pointers: nil is JSON null (for example the EFL of an afocal system).
+type Report struct {
+	Format        string         `json:"format"`
+	Title         string         `json:"title,omitempty"`
+	WavelengthsNM []float64      `json:"wavelengths_nm"`
+	Media         []MediumIndex  `json:"media"`
+	System        SystemValues   `json:"system"`
+	Chromatic     []Cardinal     `json:"chromatic"` // cardinal points at every wavelength (tangential plane)
+	Elements      []ElementPlace `json:"elements"`
+	Rays          []Ray          `json:"rays"`
+	Beam          *BeamReport    `json:"beam,omitempty"`
+	Placement     []Placement    `json:"placement,omitempty"`
+	Warnings      []Warning      `json:"warnings"`
+}
+
+// MediumIndex is the index of one medium used on the bench at one wavelength.
+type MediumIndex struct {
+	Material     string  `json:"material"`
+	WavelengthNM float64 `json:"wavelength_nm"`
+	Index        float64 `json:"index"`
+	Model        string  `json:"model,omitempty"`
+	InRange      bool    `json:"in_range"`
+}
+
+// Cardinal holds the first-order values of the optical part at one wavelength in one plane.
+// Distances are signed along the unfolded path, positive downstream; see the README for each.
+type Cardinal struct {
+	WavelengthNM         float64       `json:"wavelength_nm"`
+	ABCD                 [2][2]float64 `json:"abcd"`
+	Afocal               bool          `json:"afocal"`
+	EFLMM                *float64      `json:"efl_mm"`
+	BFLMM                *float64      `json:"bfl_mm"`
+	FFLMM                *float64      `json:"ffl_mm"`
+	FrontPrincipalMM     *float64      `json:"front_principal_mm"`
+	RearPrincipalMM      *float64      `json:"rear_principal_mm"`
+	FrontNodalMM         *float64      `json:"front_nodal_mm"`
+	RearNodalMM          *float64      `json:"rear_nodal_mm"`
+	ImageDistanceMM      *float64      `json:"image_distance_mm"`
+	Magnification        *float64      `json:"magnification"`
+	AngularMagnification *float64      `json:"angular_magnification,omitempty"` // afocal systems
+}
+
+// PlaneValues are the system values in one plane (tangential or sagittal) at the primary wavelength.
+type PlaneValues struct {
+	Cardinal
+	ApertureStop          string   `json:"aperture_stop"` // element id, or "source"
+	FNumber               *float64 `json:"f_number"`
+	ImageNA               *float64 `json:"image_na"`
+	EntrancePupilMM       *float64 `json:"entrance_pupil_mm"` // position from the first vertex, + downstream
+	EntrancePupilRadiusMM *float64 `json:"entrance_pupil_radius_mm"`
+	ExitPupilMM           *float64 `json:"exit_pupil_mm"` // position from the last vertex, + downstream
+	ExitPupilRadiusMM     *float64 `json:"exit_pupil_radius_mm"`
+	LagrangeInvariant     *float64 `json:"lagrange_invariant_mm"` // n(ū y - u ȳ) of chief and marginal rays
+	ImageHeightMM         *float64 `json:"image_height_mm"`       // chief ray height at the image, finite conjugates
+}
+
+// SystemValues are the tangential (table-plane) values with the sagittal ones beside them.
+type SystemValues struct {
+	PlaneValues
+	FirstVertexPathMM float64     `json:"first_vertex_path_mm"`
+	LastVertexPathMM  float64     `json:"last_vertex_path_mm"`
+	Sagittal          PlaneValues `json:"sagittal"`
+	Optical           bool        `json:"optical"` // false when the bench has no lens, thin lens or mirror
+}
+
+// ElementPlace is where an element is on the path and on the table, with what passes through it.
+type ElementPlace struct {
+	ID             string      `json:"id"`
+	Type           string      `json:"type"`
+	PathMM         float64     `json:"path_mm"` // source to first vertex along the beam
+	TableXMM       float64     `json:"table_x_mm"`
+	TableYMM       float64     `json:"table_y_mm"`
+	HeadingInDeg   float64     `json:"heading_in_deg"`
+	HeadingOutDeg  float64     `json:"heading_out_deg"`
+	SemiDiameterMM *float64    `json:"semi_diameter_mm"` // null when unlimited
+	Faces          []FacePlace `json:"faces"`
+	MarginalYMM    float64     `json:"marginal_y_mm"`  // paraxial marginal ray height at the first face (tangential)
+	ChiefYMM       float64     `json:"chief_y_mm"`     // paraxial chief ray height at the first face (tangential)
+	MaxExactYMM    float64     `json:"max_exact_r_mm"` // largest radial distance of an exact ray from the axis at any face
+	Clearance      *float64    `json:"clearance"`      // max_exact_r_mm / semi_diameter_mm; > 1 means rays are cut
+}
+
+// FacePlace is one face of an element: its vertex along the path and its radius.
+type FacePlace struct {
+	PathMM         float64  `json:"path_mm"`
+	RadiusMM       *float64 `json:"radius_mm"` // null flat
+	SemiDiameterMM *float64 `json:"semi_diameter_mm"`
+	MaterialAfter  string   `json:"material_after"`
+}
+
+// Ray statuses.
+const (
+	RayOK      = "ok"
+	RayClipped = "clipped"
+	RayTIR     = "tir"
+	RayMissed  = "missed"
+)
+
+// Ray is one exactly traced ray with its paraxial twin.
+type Ray struct {
+	Name         string   `json:"name"`
+	WavelengthNM float64  `json:"wavelength_nm"`
+	Field        string   `json:"field,omitempty"` // "0.5 deg" or "1.5 mm" for fan rays
+	Pupil        float64  `json:"pupil"`           // -1..1 across the pupil for fan rays
+	Status       string   `json:"status"`
+	StoppedAt    string   `json:"stopped_at"` // element id where the ray ended early; "" when it ran through
+	Reason       string   `json:"reason,omitempty"`
+	Start        RayStart `json:"start"`
+	Hits         []Hit    `json:"hits"`
+}
+
+// RayStart is a ray at the source plane.
+type RayStart struct {
+	XMM float64    `json:"x_mm"`
+	YMM float64    `json:"y_mm"`
+	Dir [3]float64 `json:"dir"`
+}
+
+// Hit is a ray at one face: exact coordinates in the face's vertex frame, paraxial beside them.
+type Hit struct {
+	Element  string        `json:"element"`
+	Face     int           `json:"face"`
+	Paraxial ParaxialPoint `json:"paraxial"`
+	Exact    ExactPoint    `json:"exact"`
+}
+
+// ParaxialPoint is a paraxial ray leaving a face: height and slope dy/dz.
+type ParaxialPoint struct {
+	YMM  float64 `json:"y_mm"`
+	URad float64 `json:"u_rad"`
+}
+
+// ExactPoint is where an exact ray meets a face, relative to the face vertex in the frame of the
+// leaving axis, and the unit direction it leaves with.
+type ExactPoint struct {
+	XMM float64    `json:"x_mm"`
+	YMM float64    `json:"y_mm"`
+	ZMM float64    `json:"z_mm"`
+	Dir [3]float64 `json:"dir"`
+}
+
+// Warning is something a builder should look at; it does not stop the computation.
+type Warning struct {
+	Code    string `json:"code"`
+	Element string `json:"element"`
+	Message string `json:"message"`
+}
+
+// BeamReport is the Gaussian beam along the bench.
+type BeamReport struct {
+	WavelengthNM float64      `json:"wavelength_nm"`
+	M2           float64      `json:"m2"`
+	Elements     []BeamAt     `json:"elements"`
+	Waists       []Waist      `json:"waists"`
+	Samples      []BeamSample `json:"samples"` // envelope along the path, for drawing
+}
+
+// BeamAt is the beam leaving one element.
+type BeamAt struct {
+	ID           string   `json:"id"`
+	WTMM         float64  `json:"w_t_mm"`
+	WSMM         float64  `json:"w_s_mm"`
+	RTMM         *float64 `json:"r_t_mm"`
+	RSMM         *float64 `json:"r_s_mm"`
+	Transmitted  float64  `json:"transmitted"`
+	ArrivingWTMM float64  `json:"arriving_w_t_mm"`
+	ArrivingWSMM float64  `json:"arriving_w_s_mm"`
+}
+
+// Waist is a beam waist in air between elements.
+type Waist struct {
+	After       *string  `json:"after"`
+	PathMM      float64  `json:"path_mm"`
+	RadiusTMM   *float64 `json:"radius_t_mm"`
+	RadiusSMM   *float64 `json:"radius_s_mm"`
+	RayleighTMM *float64 `json:"rayleigh_t_mm"`
+	RayleighSMM *float64 `json:"rayleigh_s_mm"`
+}
+
+// BeamSample is the beam radius at one point along the unfolded path.
+type BeamSample struct {
+	PathMM float64 `json:"path_mm"`
+	WTMM   float64 `json:"w_t_mm"`
+	WSMM   float64 `json:"w_s_mm"`
+}
+
+// Placement is where an element's mount goes on the breadboard.
+type Placement struct {
+	ID           string  `json:"id"`
+	Type         string  `json:"type"`
+	TableXMM     float64 `json:"table_x_mm"`
+	TableYMM     float64 `json:"table_y_mm"`
+	HeadingDeg   float64 `json:"heading_deg"`
+	HoleColumn   int     `json:"hole_column"` // from 1 at the left edge; 0 when the table has no grid
+	HoleRow      int     `json:"hole_row"`    // from 1 at the front edge
+	OffsetXMM    float64 `json:"offset_x_mm"` // post position minus hole position
+	OffsetYMM    float64 `json:"offset_y_mm"`
+	MountWidthMM float64 `json:"mount_width_mm"`
+	MountDepthMM float64 `json:"mount_depth_mm"`
+}
