@@ -1,0 +1,17 @@
+// Command raytable lays out optical benches: it serves the bench page, prints reports and prints
+// breadboard placement lists. Run `raytable help` for the subcommands.
+package main
+
+import (
+	"context"
+	"os"
+	"os/signal"
+	"syscall"
+)
+
+func main() {
+	ctx, stop := signal.NotifyContext(context.Background(), os.Interrupt, syscall.SIGTERM)
+	code := run(ctx, os.Args[1:], os.Getenv, os.Stdin, os.Stdout, os.Stderr)
+	stop()
+	os.Exit(code)
+}
