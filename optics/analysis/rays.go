@@ -1,0 +1,96 @@
+package analysis
+
+import (
+	"fmt"
+	"math"
+
+	"raytable/optics"
+	"raytable/optics/paraxial"
+	"raytable/optics/trace"
+)
+
+// traceRays traces the explicit rays and the fans exactly, pairs every hit with the paraxial twin
+// of the ray, records the largest ray height at each element, and summarises rays that stopped
+// early as warnings, one per element and status.
+func traceRays(b *optics.Bench, p *optics.Path, places []optics.ElementPlace) ([]optics.Ray, []optics.Warning) {
+	specs := trace.Rays(b, p)
+	buf := make([]trace.Point, 0, len(p.Surfaces))
+	twin := make([]paraxial.Ray, len(p.Surfaces))
+	rays := make([]optics.Ray, 0, len(specs))
+	type stopKey struct {
+		element int
+		status  string
+	}
+	stopped := map[stopKey]int{}
+	var stopOrder []stopKey
+
+	for _, spec := range specs {
+		res := trace.Trace(p, spec.K, spec.Start, buf)
+		paraxial.TraceInto(p, spec.K, paraxial.Tangential, paraxial.Ray{Y: spec.ParaxialY, NU: spec.ParaxialU}, twin)
+		ray := optics.Ray{
+			Name:         spec.Name,
+			WavelengthNM: p.WavelengthsNM[spec.K],
+			Field:        spec.Field,
+			Pupil:        spec.Pupil,
+			Status:       res.Status,
+			Reason:       res.Reason,
+			Start:        optics.RayStart{XMM: spec.Start.Pos.X, YMM: spec.Start.Pos.Y, Dir: vec(spec.Start.Dir)},
+			Hits:         make([]optics.Hit, 0, len(res.Points)),
+		}
+		for _, pt := range res.Points {
+			s := &p.Surfaces[pt.Surface]
+			ray.Hits = append(ray.Hits, optics.Hit{
+				Element:  s.ID,
+				Face:     s.Face,
+				Paraxial: optics.ParaxialPoint{YMM: twin[pt.Surface].Y, URad: twin[pt.Surface].NU / s.Index[spec.K]},
+				Exact:    optics.ExactPoint{XMM: pt.Pos.X, YMM: pt.Pos.Y, ZMM: pt.Pos.Z, Dir: vec(pt.Dir)},
+			})
+			if r := math.Hypot(pt.Pos.X, pt.Pos.Y); r > places[s.Element].MaxExactYMM {
+				places[s.Element].MaxExactYMM = r
+			}
+		}
+		if res.Surface >= 0 {
+			el := p.Surfaces[res.Surface].Element
+			ray.StoppedAt = b.Elements[el].ID
+			if res.Status != optics.RayOK {
+				k := stopKey{el, res.Status}
+				if stopped[k] == 0 {
+					stopOrder = append(stopOrder, k)
+				}
+				stopped[k]++
+			}
+		}
+		rays = append(rays, ray)
+	}
+	for i := range places {
+		if sd := places[i].SemiDiameterMM; sd != nil && *sd > 0 {
+			places[i].Clearance = ptr(places[i].MaxExactYMM / *sd)
+		}
+	}
+	var warnings []optics.Warning
+	for _, k := range stopOrder {
+		e := &b.Elements[k.element]
+		warnings = append(warnings, optics.Warning{
+			Code:    "rays-" + k.status,
+			Element: e.ID,
+			Message: stopMessage(e, k.status, stopped[k], len(specs)),
+		})
+	}
+	return rays, warnings
+}
+
+func stopMessage(e *optics.Element, status string, n, total int) string {
+	switch status {
+	case optics.RayClipped:
+		return fmt.Sprintf("%d of %d traced rays are cut by the %s mm clear aperture of %s", n, total, num(2*e.SemiDiameterMM()), e.ID)
+	case optics.RayTIR:
+		return fmt.Sprintf("%d of %d traced rays are totally reflected inside %s", n, total, e.ID)
+	default:
+		return fmt.Sprintf("%d of %d traced rays miss a face of %s", n, total, e.ID)
+	}
+}
+
+func vec(v trace.Vec) [3]float64 { return [3]float64{v.X, v.Y, v.Z} }
+
+// num formats a length compactly: 25.4, 0.04, 150.
+func num(v float64) string { return fmt.Sprintf("%.4g", v) }

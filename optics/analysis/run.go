@@ -1,0 +1,60 @@
+package analysis
+
+import (
+	"raytable/optics"
+	"raytable/optics/beam"
+	"raytable/optics/layout"
+	"raytable/optics/paraxial"
+)
+
+// Run validates b and computes its full report. The error is an *optics.Error with code
+// optics.EInvalid when the bench breaks a rule; a valid bench always gives a report, whatever
+// happens to its rays (clipped, missed or totally reflected rays are results, not errors).
+func Run(b *optics.Bench) (*optics.Report, error) {
+	if err := optics.Validate(b); err != nil {
+		return nil, err
+	}
+	p := optics.BuildPath(b)
+	r := &optics.Report{
+		Format:        optics.FormatReportV1,
+		Title:         b.Title,
+		WavelengthsNM: b.WavelengthsNM,
+		Warnings:      []optics.Warning{},
+	}
+	r.Media, r.Warnings = media(b, r.Warnings)
+
+	tan := paraxial.Analyze(b, p, 0, paraxial.Tangential)
+	sag := paraxial.Analyze(b, p, 0, paraxial.Sagittal)
+	r.System = systemValues(p, tan.Values, sag.Values)
+	for k := range b.WavelengthsNM {
+		r.Chromatic = append(r.Chromatic, paraxial.Cardinals(p, k, paraxial.Tangential, &b.Source))
+	}
+
+	r.Elements = layout.Walk(b)
+	fillElements(r.Elements, b, p, tan)
+	var rayWarnings []optics.Warning
+	r.Rays, rayWarnings = traceRays(b, p, r.Elements)
+	r.Warnings = append(r.Warnings, rayWarnings...)
+
+	var beamWarnings []optics.Warning
+	r.Beam, beamWarnings = beam.Propagate(b, p)
+	r.Warnings = append(r.Warnings, beamWarnings...)
+	r.Warnings = append(r.Warnings, beam.SafetyWarnings(b, p)...)
+
+	var planWarnings []optics.Warning
+	r.Placement, planWarnings = layout.Plan(b, r.Elements, beamRadius(r, b))
+	r.Warnings = append(r.Warnings, planWarnings...)
+	r.Warnings = append(r.Warnings, screenWarnings(b, r)...)
+	return r, nil
+}
+
+// systemValues combines the two planes and says where the optical part starts and ends.
+func systemValues(p *optics.Path, tan, sag optics.PlaneValues) optics.SystemValues {
+	sv := optics.SystemValues{PlaneValues: tan, Sagittal: sag}
+	if first, last, ok := p.OpticalRange(); ok {
+		sv.Optical = true
+		sv.FirstVertexPathMM = p.Surfaces[first].PathMM
+		sv.LastVertexPathMM = p.Surfaces[last].PathMM
+	}
+	return sv
+}
