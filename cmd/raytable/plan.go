@@ -1,0 +1,56 @@
+package main
+
+import (
+	"context"
+	"encoding/csv"
+	"flag"
+	"fmt"
+	"strings"
+	"text/tabwriter"
+
+	"raytable/optics/layout"
+)
+
+// runPlan prints the breadboard placement list of a bench: where each mount's post goes and the
+// nearest hole of the grid. --csv writes it for spreadsheets, with formula-like cells made inert.
+func runPlan(_ context.Context, e env) int {
+	fs := flag.NewFlagSet("plan", flag.ContinueOnError)
+	fs.SetOutput(e.stderr)
+	asCSV := fs.Bool("csv", false, "print the placement list as CSV")
+	fs.Usage = func() {
+		fmt.Fprintln(e.stderr, "usage: raytable plan FILE|- [--csv]")
+		fs.PrintDefaults()
+	}
+	path, ok := oneFileArg(fs, e.args)
+	if !ok {
+		return exitInvalid
+	}
+	_, r, code := readBench(e, path)
+	if code != exitOK {
+		return code
+	}
+	rows := layout.PlacementRows(r.Placement)
+	if *asCSV {
+		cw := csv.NewWriter(e.stdout)
+		if err := cw.WriteAll(rows); err != nil {
+			fmt.Fprintf(e.stderr, "raytable: %v\n", err)
+			return exitInternal
+		}
+		return exitOK
+	}
+	tw := tabwriter.NewWriter(e.stdout, 0, 0, 2, ' ', 0)
+	for _, row := range rows {
+		fmt.Fprintln(tw, strings.Join(row, "\t"))
+	}
+	if len(r.Warnings) > 0 {
+		fmt.Fprintln(tw)
+		for _, w := range r.Warnings {
+			fmt.Fprintf(tw, "warning [%s] %s\t%s\n", w.Code, w.Element, w.Message)
+		}
+	}
+	if err := tw.Flush(); err != nil {
+		fmt.Fprintf(e.stderr, "raytable: %v\n", err)
+		return exitInternal
+	}
+	return exitOK
+}
