@@ -57,10 +57,10 @@ type Constant struct {
 // NewConstant validates a constant index: finite and at least 1 (relative to air).
 func NewConstant(n float64) (Constant, error) {
 	if math.IsNaN(n) || math.IsInf(n, 0) {
-		return Constant{}, fmt.Errorf("index: must be a finite number, got %v", n)
+		return Constant{}, InputError{{Field: "index", Rule: fmt.Sprintf("must be a finite number, got %v", n)}}
 	}
 	if n < 1 {
-		return Constant{}, fmt.Errorf("index: must be at least 1 (indices are relative to air), got %v", n)
+		return Constant{}, InputError{{Field: "index", Rule: fmt.Sprintf("must be at least 1 (indices are relative to air), got %v", n)}}
 	}
 	return Constant{N: n}, nil
 }
