@@ -1,49 +1,68 @@
 package optics
 
 import (
+	"errors"
 	"sort"
-	"strings"
 
 	"raytable/optics/material"
 )
 
 // Medium resolves a material name as a bench references it: a user-defined material of the bench,
-// a built-in medium, or a glass code "code:NNNMMM". The error names the rule that failed.
+// a built-in medium, or a glass code "code:NNNMMM". The error is an EInvalid *Error whose message
+// names the rule that failed; the caller adds the JSON path.
 func (b *Bench) Medium(name string) (material.Medium, error) {
 	if spec, ok := b.Materials[name]; ok {
-		return spec.Medium()
+		return spec.Medium("materials." + name)
 	}
-	if m, ok := material.Builtin(name); ok {
-		return m, nil
+	m, err := material.Lookup(name)
+	if err != nil {
+		return nil, &Error{Code: EInvalid, Message: err.Error()}
 	}
-	if strings.HasPrefix(name, "code:") {
-		if _, err := material.ParseGlassCode(name); err != nil {
-			return nil, err
-		}
-	}
-	return nil, Errorf(EInvalid, "unknown material %q: use a built-in medium (%s), a glass code such as code:517642, or define it under materials",
-		name, strings.Join(material.BuiltinNames(), ", "))
+	return m, nil
 }
 
-// Medium turns a user-defined material into a medium. It assumes the spec passed validation.
-func (s MaterialSpec) Medium() (material.Medium, error) {
+// Medium turns a user-defined material into a medium; path is where the material sits in the
+// bench ("materials.my-glass"), so that problems name the field.
+func (s MaterialSpec) Medium(path string) (material.Medium, error) {
+	var (
+		m   material.Medium
+		err error
+	)
 	switch {
 	case s.Sellmeier != nil:
 		lo, hi := 0.0, inf
 		if len(s.RangeNM) == 2 {
 			lo, hi = s.RangeNM[0], s.RangeNM[1]
 		}
-		m, err := material.NewSellmeier(s.Sellmeier.B, s.Sellmeier.CUM2, lo, hi)
-		if err != nil {
-			return nil, err
-		}
-		return m, nil
+		m, err = material.NewSellmeier(s.Sellmeier.B, s.Sellmeier.CUM2, lo, hi)
 	case s.ND != nil && s.VD != nil:
-		return material.GlassCode{ND: *s.ND, VD: *s.VD}, nil
+		m, err = material.NewGlassCode(*s.ND, *s.VD)
 	case s.Index != nil:
-		return material.Constant{N: *s.Index}, nil
+		m, err = material.NewConstant(*s.Index)
+	default:
+		return nil, Invalid([]Problem{{Path: path, Message: "a material needs sellmeier, nd and vd, or index"}})
 	}
-	return nil, Errorf(EInvalid, "a material needs sellmeier, nd and vd, or index")
+	if err != nil {
+		return nil, materialError(path, err)
+	}
+	return m, nil
+}
+
+// materialError turns the material package's field errors into problems at path.
+func materialError(path string, err error) error {
+	var fields material.InputError
+	if !errors.As(err, &fields) {
+		return Invalid([]Problem{{Path: path, Message: err.Error()}})
+	}
+	problems := make([]Problem, len(fields))
+	for i, f := range fields {
+		p := path
+		if f.Field != "" {
+			p += "." + f.Field
+		}
+		problems[i] = Problem{Path: p, Message: f.Rule}
+	}
+	return Invalid(problems)
 }
 
 // Media resolves every material the elements use, by name. Names that do not resolve are left out;
