@@ -1,0 +1,91 @@
+package layout
+
+import (
+	"math"
+
+	"raytable/optics"
+)
+
+// Grid is a breadboard's hole pattern: holes every PitchMM in both directions, the first one
+// OffsetMM from the front and the left edge, Columns across the width and Rows along the depth,
+// every hole centre strictly inside the table.
+type Grid struct {
+	Kind     string  `json:"kind"`   // optics.GridMetric25, optics.GridImperial1 or optics.GridNone
+	Thread   string  `json:"thread"` // the screw the holes take; "" without a grid
+	PitchMM  float64 `json:"pitch_mm"`
+	OffsetMM float64 `json:"offset_mm"`
+	Columns  int     `json:"columns"`
+	Rows     int     `json:"rows"`
+}
+
+// Common practice for optical breadboards: metric tables have M6 holes on a 25 mm pitch, imperial
+// ones 1/4-20 holes on a 1 in pitch, and the first hole sits half a pitch from the front and left
+// edges (12.5 mm, 0.5 in) so that tables butted together continue the grid.
+const (
+	metricPitchMM    = 25
+	metricOffsetMM   = 12.5
+	imperialPitchMM  = 25.4
+	imperialOffsetMM = 12.7
+)
+
+// Holes describes the hole grid of a table; a table without a grid (or with an unknown grid name,
+// or without a usable size) has no columns and no rows.
+func Holes(t optics.Table) Grid {
+	g := Grid{Kind: t.Grid}
+	switch t.Grid {
+	case optics.GridMetric25:
+		g.Thread, g.PitchMM, g.OffsetMM = "M6", metricPitchMM, metricOffsetMM
+	case optics.GridImperial1:
+		g.Thread, g.PitchMM, g.OffsetMM = "1/4-20", imperialPitchMM, imperialOffsetMM
+	default:
+		return g
+	}
+	if t.HoleOffsetMM != nil {
+		g.OffsetMM = *t.HoleOffsetMM
+	}
+	g.Columns = holeCount(t.WidthMM, g.OffsetMM, g.PitchMM)
+	g.Rows = holeCount(t.DepthMM, g.OffsetMM, g.PitchMM)
+	return g
+}
+
+// holeCount counts holes at offset, offset+pitch, ... whose centres lie strictly inside (0, size).
+func holeCount(sizeMM, offsetMM, pitchMM float64) int {
+	if !finite(sizeMM) || !finite(offsetMM) || !(pitchMM > 0) || offsetMM <= 0 || offsetMM >= sizeMM {
+		return 0
+	}
+	n := int(math.Floor((sizeMM-offsetMM)/pitchMM)) + 1
+	if offsetMM+float64(n-1)*pitchMM >= sizeMM { // a hole exactly on the far edge is not a hole
+		n--
+	}
+	return n
+}
+
+// Hole returns the centre of the hole in column col and row row, both counted from 1 at the
+// front-left corner.
+func (g Grid) Hole(col, row int) (x, y float64) {
+	return g.OffsetMM + float64(col-1)*g.PitchMM, g.OffsetMM + float64(row-1)*g.PitchMM
+}
+
+// Nearest returns the hole of the grid nearest to (x, y): column and row counted from 1 at the
+// front-left corner, and the hole's centre. On a rectangular grid the nearest hole is the nearest
+// column together with the nearest row, so a point off the table gets the nearest edge hole.
+// ok is false when the grid has no holes or the point is not a finite position.
+func (g Grid) Nearest(x, y float64) (col, row int, hx, hy float64, ok bool) {
+	if g.Columns == 0 || g.Rows == 0 || !finite(x) || !finite(y) {
+		return 0, 0, 0, 0, false
+	}
+	col = nearestIndex(x, g.OffsetMM, g.PitchMM, g.Columns)
+	row = nearestIndex(y, g.OffsetMM, g.PitchMM, g.Rows)
+	hx, hy = g.Hole(col, row)
+	return col, row, hx, hy, true
+}
+
+func nearestIndex(v, offsetMM, pitchMM float64, n int) int {
+	i := int(math.Round((v-offsetMM)/pitchMM)) + 1
+	return max(1, min(n, i))
+}
+
+// NearestHole returns the hole of table t nearest to (x, y); see Grid.Nearest.
+func NearestHole(t optics.Table, x, y float64) (col, row int, hx, hy float64, ok bool) {
+	return Holes(t).Nearest(x, y)
+}
