@@ -1,0 +1,137 @@
+package beam
+
+import (
+	"fmt"
+	"math"
+
+	"raytable/optics"
+	"raytable/optics/paraxial"
+)
+
+// Warning codes of this package.
+const (
+	CodeClipped           = "beam-clipped"
+	CodeBeamInvalid       = "beam-invalid"
+	CodeBackReflection    = "back-reflection-focus"
+	CodeFocusInGlass      = "focus-in-glass"
+	CodeFocusNearGlass    = "focus-near-glass"
+	backReflectionReachMM = 25.0 // mm: a ghost focus this close to the source or an optic upstream is reported
+	nearGlassMM           = 1.0  // mm: a focus this close to a glass surface is reported
+)
+
+// planeTrace is the reduced q of one plane just before and just after each surface's power.
+type planeTrace struct {
+	start         complex128 // at the source plane
+	arrive, leave []complex128
+}
+
+// at is the reduced q at the start of stretch i (after surface i-1, or at the source).
+func (t *planeTrace) at(i int) complex128 {
+	if i == 0 {
+		return t.start
+	}
+	return t.leave[i-1]
+}
+
+// trace carries q through p in one plane at the primary wavelength, with the gap and surface
+// matrices of package paraxial (reduced form: q̂ = q/n obeys the ABCD law for them).
+func trace(p *optics.Path, plane paraxial.Plane, q0 complex128) planeTrace {
+	t := planeTrace{start: q0, arrive: make([]complex128, len(p.Surfaces)), leave: make([]complex128, len(p.Surfaces))}
+	q := q0
+	for i := range p.Surfaces {
+		q = applyABCD(paraxial.GapMatrix(p, i, 0), q)
+		t.arrive[i] = q
+		q = applyABCD(paraxial.SurfaceMatrix(p, i, 0, plane), q)
+		t.leave[i] = q
+	}
+	return t
+}
+
+// Propagate follows source.beam along p at the primary wavelength in both planes and reports the
+// beam leaving every element, every real waist in air, the envelope for drawing, and warnings for
+// clipping and for beam foci in or next to glass. The report is nil when the source has no beam.
+func Propagate(b *optics.Bench, p *optics.Path) (*optics.BeamReport, []optics.Warning) {
+	if b == nil || p == nil || b.Source.Beam == nil {
+		return nil, nil
+	}
+	bm := b.Source.Beam
+	m2 := bm.BeamQuality()
+	if len(p.WavelengthsNM) == 0 || !(p.WavelengthsNM[0] > 0) || !(bm.WaistRadiusMM > 0) || !(m2 > 0) ||
+		math.IsInf(bm.WaistRadiusMM, 0) || math.IsInf(m2, 0) || math.IsNaN(bm.WaistAtMM) || math.IsInf(bm.WaistAtMM, 0) {
+		return nil, []optics.Warning{{Code: CodeBeamInvalid, Message: "source.beam needs a positive finite waist_radius_mm and m2, a finite waist_at_mm and a positive wavelength; the beam was not computed"}}
+	}
+	for i := range p.Surfaces {
+		if len(p.Surfaces[i].Index) == 0 {
+			return nil, []optics.Warning{{Code: CodeBeamInvalid, Element: p.Surfaces[i].ID, Message: "the path has no index for this surface; the beam was not computed"}}
+		}
+	}
+	lam := p.WavelengthsNM[0]
+	g := newGaussian(lam, m2)
+	q0 := g.sourceQ(bm.WaistRadiusMM, bm.WaistAtMM)
+	t := trace(p, paraxial.Tangential, q0)
+	s := trace(p, paraxial.Sagittal, q0)
+	st := stretches(p)
+
+	rep := &optics.BeamReport{WavelengthNM: lam, M2: m2, Elements: make([]optics.BeamAt, 0, len(p.Spans))}
+	var warns []optics.Warning
+	for _, sp := range p.Spans {
+		row, faces, ok := elementRow(p, g, &t, &s, sp)
+		if !ok {
+			continue
+		}
+		rep.Elements = append(rep.Elements, row)
+		if row.Transmitted < PassFraction {
+			warns = append(warns, clipWarning(row, faces))
+		}
+	}
+	rep.Waists = waists(p, g, st, &t, &s)
+	rep.Samples = samples(p, g, st, &t, &s)
+	warns = append(warns, beamFocusWarnings(p, g, st, &t, &s)...)
+	return rep, warns
+}
+
+// elementRow is the beam at one element: arriving at its first face, leaving its last, and the
+// fraction its clear apertures pass (the product over its faces).
+func elementRow(p *optics.Path, g gaussian, t, s *planeTrace, sp optics.Span) (optics.BeamAt, []footprint, bool) {
+	if sp.First < 0 || sp.Last < sp.First || sp.Last >= len(p.Surfaces) {
+		return optics.BeamAt{}, nil, false
+	}
+	last := &p.Surfaces[sp.Last]
+	nOut := last.Index[0]
+	row := optics.BeamAt{
+		ID:           last.ID,
+		WTMM:         g.radiusMM(t.leave[sp.Last]),
+		WSMM:         g.radiusMM(s.leave[sp.Last]),
+		RTMM:         curvatureMM(t.leave[sp.Last], nOut),
+		RSMM:         curvatureMM(s.leave[sp.Last], nOut),
+		ArrivingWTMM: g.radiusMM(t.arrive[sp.First]),
+		ArrivingWSMM: g.radiusMM(s.arrive[sp.First]),
+		Transmitted:  1,
+	}
+	var faces []footprint
+	for i := sp.First; i <= sp.Last; i++ {
+		sf := &p.Surfaces[i]
+		if math.IsInf(sf.SemiAperture, 1) {
+			continue
+		}
+		f := footprint{aMM: sf.SemiAperture, wtMM: g.radiusMM(t.arrive[i]), wsMM: g.radiusMM(s.arrive[i])}
+		if sf.Kind == optics.Reflecting {
+			// The beam meets the mirror obliquely: across the plane of incidence its footprint on
+			// the mirror is longer by 1/cos i, while the clear aperture is a circle on the mirror.
+			f.wtMM /= math.Cos(sf.IncidenceRad)
+		}
+		faces = append(faces, f)
+	}
+	row.Transmitted = passed(faces)
+	return row, faces, true
+}
+
+func clipWarning(row optics.BeamAt, faces []footprint) optics.Warning {
+	want := clearDiameterFor(faces, PassFraction)
+	return optics.Warning{
+		Code:    CodeClipped,
+		Element: row.ID,
+		Message: fmt.Sprintf("%s passes %.1f %% of the arriving beam through its %.3g mm clear diameter; a clear diameter of %.3g mm or more passes 99 %%. Downstream the beam is computed as if it were not clipped.",
+			row.ID, 100*row.Transmitted, 2*faces[0].aMM, want),
+	}
+}

@@ -1,0 +1,238 @@
+package beam
+
+import (
+	"fmt"
+	"math"
+
+	"raytable/optics"
+	"raytable/optics/paraxial"
+)
+
+// SafetyWarnings checks the bench with the paraxial ray bundle of the source (no beam needed):
+//
+//   - back-reflection-focus: the Fresnel reflection off each refracting face, traced back upstream
+//     through the surfaces before it, comes to a focus within 25 mm of the source (in front of it
+//     or inside the laser) or of an element upstream, or inside glass. The reflecting face acts as
+//     a mirror of radius -R seen from the incoming light; going back, every surface keeps its power.
+//   - focus-in-glass, focus-near-glass: the source bundle comes to a focus inside glass or within
+//     1 mm of a glass surface (a damage risk for a laser).
+//
+// The bundle is the on-axis marginal ray: parallel to the axis for a collimated source, from the
+// axis point of the object plane for a point source; the focus positions do not depend on its
+// height or slope. Both planes are followed. Surfaces after a dump get no light and are skipped.
+// Thin lenses have no face geometry and mirrors send their reflection downstream, so only
+// refracting faces are checked for back-reflections.
+func SafetyWarnings(b *optics.Bench, p *optics.Path) []optics.Warning {
+	if b == nil || p == nil || len(p.Surfaces) == 0 {
+		return nil
+	}
+	var r0 paraxial.Ray
+	switch b.Source.Kind {
+	case optics.SourceCollimated:
+		r0 = paraxial.Ray{Y: 1}
+	case optics.SourcePoint:
+		r0 = paraxial.Ray{NU: 1}
+	default:
+		return nil
+	}
+	for i := range p.Surfaces {
+		if len(p.Surfaces[i].Index) == 0 {
+			return nil
+		}
+	}
+	st := stretches(p)
+	var ws warnSet
+	for _, plane := range []paraxial.Plane{paraxial.Tangential, paraxial.Sagittal} {
+		arrive, leave := traceRay(p, plane, r0)
+		lit := st[:len(arrive)+1]
+		if p.Surfaces[len(arrive)-1].Stops {
+			lit = lit[:len(lit)-1] // nothing passes the dump
+		}
+		for _, x := range lit {
+			r := r0
+			if x.I > 0 {
+				r = leave[x.I-1]
+			}
+			z, ok := crossing(x, r)
+			if !ok || (x.I == 0 && sameZ(z, 0)) {
+				continue
+			}
+			if code, id, where, hit := focusHazard(p, x, z); hit {
+				ws.add(code, id, plane, fmt.Sprintf("the paraxial focus of the source's ray bundle lies %s", where))
+			}
+		}
+		for j := range arrive {
+			if p.Surfaces[j].Kind != optics.Refracting {
+				continue
+			}
+			if where, hit := backReflection(p, st, j, arrive[j], plane); hit {
+				s := &p.Surfaces[j]
+				ws.add(CodeBackReflection, s.ID, plane, fmt.Sprintf("the reflection off face %d of %s goes back upstream and comes to a focus %s", s.Face, s.ID, where))
+			}
+		}
+	}
+	return ws.list()
+}
+
+// traceRay follows a paraxial ray in one plane at the primary wavelength up to the first dump
+// (included), giving it just before and just after each surface's power.
+func traceRay(p *optics.Path, plane paraxial.Plane, r paraxial.Ray) (arrive, leave []paraxial.Ray) {
+	for i := range p.Surfaces {
+		r = paraxial.GapMatrix(p, i, 0).Apply(r)
+		arrive = append(arrive, r)
+		r = paraxial.SurfaceMatrix(p, i, 0, plane).Apply(r)
+		leave = append(leave, r)
+		if p.Surfaces[i].Stops {
+			break
+		}
+	}
+	return arrive, leave
+}
+
+// crossing is where a ray starting stretch x as r meets the axis: y + (z - Z0)·(n·u)/n = 0.
+func crossing(x stretch, r paraxial.Ray) (float64, bool) {
+	if r.NU == 0 {
+		return 0, false
+	}
+	z := x.Z0 - r.Y*x.N/r.NU
+	return z, x.contains(z)
+}
+
+// focusHazard says whether a focus at z in stretch x lies inside glass or within 1 mm of a
+// refracting face, with the element concerned and a plain description of where.
+func focusHazard(p *optics.Path, x stretch, z float64) (code, id, where string, hit bool) {
+	if x.Glass() {
+		prev := &p.Surfaces[x.I-1]
+		return CodeFocusInGlass, prev.ID, fmt.Sprintf("inside the glass of %s, %.3g mm after its face %d (path %.1f mm)", prev.ID, z-x.Z0, prev.Face, z), true
+	}
+	best := math.Inf(1)
+	if x.I > 0 && p.Surfaces[x.I-1].Kind == optics.Refracting && z-x.Z0 <= nearGlassMM {
+		s := &p.Surfaces[x.I-1]
+		best = z - x.Z0
+		code, id, where = CodeFocusNearGlass, s.ID, fmt.Sprintf("%.3g mm after face %d of %s (path %.1f mm)", best, s.Face, s.ID, z)
+	}
+	if x.I < len(p.Surfaces) && p.Surfaces[x.I].Kind == optics.Refracting && x.Z1-z <= nearGlassMM && x.Z1-z < best {
+		s := &p.Surfaces[x.I]
+		code, id, where = CodeFocusNearGlass, s.ID, fmt.Sprintf("%.3g mm before face %d of %s (path %.1f mm)", x.Z1-z, s.Face, s.ID, z)
+	}
+	return code, id, where, code != ""
+}
+
+// backReflection traces the reflection off refracting face j back upstream and reports the first
+// focus it forms inside glass or within 25 mm of the source or of an element upstream of j's.
+// arriving is the ray just before face j.
+func backReflection(p *optics.Path, st []stretch, j int, arriving paraxial.Ray, plane paraxial.Plane) (string, bool) {
+	s := &p.Surfaces[j]
+	n := p.IndexBefore(j, 0)
+	// Seen from the incoming light the face is a mirror of curvature -c in a medium of index n;
+	// unfolded, a mirror of curvature c_m has reduced power 2·n·c_m.
+	// Its power is P = 2·n·(-c), and the matrix [1 0; -P 1] has C = 2·n·c. Unfolded, heights stay
+	// continuous and the light meets the earlier surfaces in reverse order with unchanged powers.
+	r := paraxial.Matrix{A: 1, C: 2 * n * s.Curvature, D: 1}.Apply(arriving)
+	for k := j - 1; k >= -1; k-- {
+		zA := p.Surfaces[k+1].PathMM
+		zB := -backReflectionReachMM // beyond the source, into the laser
+		if k >= 0 {
+			zB = p.Surfaces[k].PathMM
+		}
+		x := st[k+1]
+		if r.NU != 0 {
+			d := -r.Y * x.N / r.NU // distance travelled back to the axis crossing
+			if d > 0 && d <= zA-zB {
+				if where, hit := backHazard(p, x, zA-d, s.Element); hit {
+					return where, true
+				}
+			}
+		}
+		r = paraxial.Transfer(zA-zB, x.N).Apply(r)
+		if k >= 0 {
+			r.NU -= paraxial.Power(&p.Surfaces[k], p.IndexBefore(k, 0), p.Surfaces[k].Index[0], plane) * r.Y
+		}
+	}
+	return "", false
+}
+
+// backHazard says whether a ghost focus at z in stretch x is dangerous: inside glass, or within
+// 25 mm of the source or of a surface of an element before element ei.
+func backHazard(p *optics.Path, x stretch, z float64, ei int) (string, bool) {
+	if x.Glass() {
+		return fmt.Sprintf("inside the glass of %s (path %.1f mm)", p.Surfaces[x.I].ID, z), true
+	}
+	best, where := math.Inf(1), ""
+	if d := math.Abs(z); d <= backReflectionReachMM {
+		best = d
+		if z < 0 {
+			where = fmt.Sprintf("%.3g mm behind the source plane, inside the source", d)
+		} else {
+			where = fmt.Sprintf("%.3g mm in front of the source (path %.1f mm)", d, z)
+		}
+	}
+	for m := range p.Surfaces {
+		u := &p.Surfaces[m]
+		if u.Element >= ei {
+			break
+		}
+		if d := math.Abs(z - u.PathMM); d <= backReflectionReachMM && d < best {
+			best, where = d, fmt.Sprintf("%.3g mm from %s (path %.1f mm)", d, u.ID, z)
+		}
+	}
+	return where, where != ""
+}
+
+// beamFocusWarnings reports the beam's own waists that lie inside glass or within 1 mm of a glass
+// surface. A waist counts as a focus when the beam converges into it within its stretch, which
+// leaves out the source's waist at the source plane.
+func beamFocusWarnings(p *optics.Path, g gaussian, st []stretch, t, s *planeTrace) []optics.Warning {
+	var ws warnSet
+	for _, x := range st {
+		for _, pl := range []struct {
+			plane paraxial.Plane
+			tr    *planeTrace
+		}{{paraxial.Tangential, t}, {paraxial.Sagittal, s}} {
+			w, ok := waistIn(g, x, pl.tr.at(x.I))
+			if !ok || sameZ(w.zMM, x.Z0) {
+				continue
+			}
+			if code, id, where, hit := focusHazard(p, x, w.zMM); hit {
+				ws.add(code, id, pl.plane, fmt.Sprintf("the beam comes to a waist of radius %.3g µm %s", 1000*w.radiusMM, where))
+			}
+		}
+	}
+	return ws.list()
+}
+
+// warnSet collects warnings, one per code and element, noting which planes found it.
+type warnSet struct {
+	ws     []optics.Warning
+	planes []string
+	index  map[[2]string]int
+}
+
+func (w *warnSet) add(code, id string, plane paraxial.Plane, msg string) {
+	name := "tangential"
+	if plane == paraxial.Sagittal {
+		name = "sagittal"
+	}
+	if w.index == nil {
+		w.index = map[[2]string]int{}
+	}
+	key := [2]string{code, id}
+	if i, ok := w.index[key]; ok {
+		if w.planes[i] != name && w.planes[i] != "tangential and sagittal" {
+			w.planes[i] = "tangential and sagittal"
+		}
+		return
+	}
+	w.index[key] = len(w.ws)
+	w.ws = append(w.ws, optics.Warning{Code: code, Element: id, Message: msg})
+	w.planes = append(w.planes, name)
+}
+
+func (w *warnSet) list() []optics.Warning {
+	out := make([]optics.Warning, len(w.ws))
+	for i, x := range w.ws {
+		x.Message = fmt.Sprintf("%s (%s plane%s).", x.Message, w.planes[i], map[bool]string{true: "s"}[w.planes[i] == "tangential and sagittal"])
+		out[i] = x
+	}
+	return out
+}

@@ -1,0 +1,120 @@
+package beam
+
+import (
+	"math"
+	"slices"
+
+	"raytable/optics"
+)
+
+// planeWaist is a waist of one plane: where, how large, and in which stretch.
+type planeWaist struct {
+	stretch    int
+	zMM        float64
+	radiusMM   float64
+	rayleighMM float64 // physical Rayleigh range in the stretch's medium
+}
+
+// waistIn finds the waist of the beam in stretch st, whose reduced q at the start is q: q̂(z) =
+// q̂0 + (z - Z0)/n has Re q̂ = 0 at z = Z0 - n·Re(q̂0). ok is false when that point lies outside
+// the stretch (a virtual waist, or one beyond it).
+func waistIn(g gaussian, st stretch, q complex128) (planeWaist, bool) {
+	z := st.Z0 - st.N*real(q)
+	if !st.contains(z) {
+		return planeWaist{}, false
+	}
+	return planeWaist{
+		stretch:    st.I,
+		zMM:        z,
+		radiusMM:   g.waistRadiusMM(imag(q)),
+		rayleighMM: st.N * imag(q),
+	}, true
+}
+
+// waists lists every real waist in air from the source to the last element's last vertex, in path
+// order. Tangential and sagittal waists at one position are one entry; otherwise each entry has the
+// other plane's fields nil. Waists inside an element's glass, upstream of the source (virtual) and
+// beyond the last surface are left out.
+func waists(p *optics.Path, g gaussian, st []stretch, t, s *planeTrace) []optics.Waist {
+	var ws, ss []planeWaist
+	for _, x := range st[:len(st)-1] { // the last stretch lies beyond the last element
+		if x.Glass() {
+			continue
+		}
+		if w, ok := waistIn(g, x, t.at(x.I)); ok {
+			ws = append(ws, w)
+		}
+		if w, ok := waistIn(g, x, s.at(x.I)); ok {
+			ss = append(ss, w)
+		}
+	}
+	out := make([]optics.Waist, 0, len(ws)+len(ss))
+	used := make([]bool, len(ss))
+	for _, w := range ws {
+		e := optics.Waist{After: upstreamID(p, w.stretch), PathMM: w.zMM, RadiusTMM: ptr(w.radiusMM), RayleighTMM: ptr(w.rayleighMM)}
+		for j, v := range ss {
+			if !used[j] && v.stretch == w.stretch && sameZ(v.zMM, w.zMM) {
+				used[j] = true
+				e.RadiusSMM, e.RayleighSMM = ptr(v.radiusMM), ptr(v.rayleighMM)
+				break
+			}
+		}
+		out = append(out, e)
+	}
+	for j, v := range ss {
+		if !used[j] {
+			out = append(out, optics.Waist{After: upstreamID(p, v.stretch), PathMM: v.zMM, RadiusSMM: ptr(v.radiusMM), RayleighSMM: ptr(v.rayleighMM)})
+		}
+	}
+	slices.SortStableFunc(out, func(a, b optics.Waist) int {
+		switch {
+		case a.PathMM < b.PathMM:
+			return -1
+		case a.PathMM > b.PathMM:
+			return 1
+		}
+		return 0
+	})
+	return out
+}
+
+func ptr(v float64) *float64 { return &v }
+
+// SampleCount is the number of evenly spaced envelope samples; every vertex is added to them.
+const SampleCount = 400
+
+// samples is the envelope w_t, w_s from the source to the last vertex plus a tail of a tenth of
+// that length (at least 10 mm; none after a dump, where the beam ends), inside glass too.
+func samples(p *optics.Path, g gaussian, st []stretch, t, s *planeTrace) []optics.BeamSample {
+	end := 0.0
+	tail := 10.0
+	if n := len(p.Surfaces); n > 0 {
+		end = p.Surfaces[n-1].PathMM
+		tail = math.Max(tail, end/10)
+		if p.Surfaces[n-1].Stops {
+			tail = 0
+		}
+	}
+	zEnd := end + tail
+	zs := make([]float64, 0, SampleCount+1+len(p.Surfaces))
+	for j := 0; j <= SampleCount; j++ {
+		zs = append(zs, zEnd*float64(j)/SampleCount)
+	}
+	for i := range p.Surfaces {
+		zs = append(zs, p.Surfaces[i].PathMM)
+	}
+	slices.Sort(zs)
+	zs = slices.Compact(zs)
+	out := make([]optics.BeamSample, 0, len(zs))
+	k := 0
+	for _, z := range zs {
+		for k < len(st)-1 && !(z <= st[k].Z1) {
+			k++
+		}
+		x := st[k]
+		qt := advance(t.at(x.I), z-x.Z0, x.N)
+		qs := advance(s.at(x.I), z-x.Z0, x.N)
+		out = append(out, optics.BeamSample{PathMM: z, WTMM: g.radiusMM(qt), WSMM: g.radiusMM(qs)})
+	}
+	return out
+}
