@@ -1,0 +1,65 @@
+package store
+
+import (
+	"crypto/rand"
+	"encoding/base32"
+	"io"
+	"regexp"
+	"time"
+
+	"raytable/optics"
+)
+
+// IDBytes is the number of random bytes in a revision id: 120 bits, so one id says nothing about
+// another and guessing one is hopeless.
+const IDBytes = 15
+
+// idEncoding writes ids in lower-case base32 without padding: 24 characters, safe in URLs.
+var idEncoding = base32.NewEncoding("abcdefghijklmnopqrstuvwxyz234567").WithPadding(base32.NoPadding)
+
+var idPattern = regexp.MustCompile(`^[a-z2-7]{24}$`)
+
+// Revision is one stored design. It never changes after Put.
+type Revision struct {
+	ID      string    `json:"id"`
+	Parent  string    `json:"parent,omitempty"` // "" for a design started from scratch, the demo or an import
+	Created time.Time `json:"created"`
+	Bench   []byte    `json:"bench"`   // canonical bench JSON from optics.Encode
+	Summary string    `json:"summary"` // one line for lists: the title, or what changed
+}
+
+// NewID returns a fresh random id read from r (crypto/rand.Reader when r is nil).
+func NewID(r io.Reader) (string, error) {
+	if r == nil {
+		r = rand.Reader
+	}
+	var b [IDBytes]byte
+	if _, err := io.ReadFull(r, b[:]); err != nil {
+		return "", optics.Errorf(optics.EInternal, "cannot make a revision id: %v", err)
+	}
+	return idEncoding.EncodeToString(b[:]), nil
+}
+
+// ValidID reports whether s has the shape of a revision id. Anything else cannot exist.
+func ValidID(s string) bool { return idPattern.MatchString(s) }
+
+func notFound(id string) error {
+	return optics.Errorf(optics.ENotFound, "there is no design %q", id)
+}
+
+func exists(id string) error {
+	return optics.Errorf(optics.EInternal, "revision %s already exists; revisions never change", id)
+}
+
+func checkPut(rev Revision) error {
+	if !ValidID(rev.ID) {
+		return optics.Errorf(optics.EInternal, "revision id %q is not a valid id", rev.ID)
+	}
+	if rev.Parent != "" && !ValidID(rev.Parent) {
+		return optics.Errorf(optics.EInternal, "parent id %q is not a valid id", rev.Parent)
+	}
+	if len(rev.Bench) == 0 {
+		return optics.Errorf(optics.EInternal, "revision %s has no bench", rev.ID)
+	}
+	return nil
+}
