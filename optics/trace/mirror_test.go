@@ -1,0 +1,129 @@
+package trace
+
+import (
+	"fmt"
+	"math"
+	"testing"
+
+	"raytable/optics"
+)
+
+// The issue's convention: a concave mirror of radius 200 mm hit at height 10 reports z = +0.25016,
+// its sag R - sqrt(R² - h²) measured along the leaving axis.
+func TestConcaveMirrorSagInLeavingFrame(t *testing.T) {
+	const r, h = 200.0, 10.0
+	pt := mustTrace(t, path(mirror(50, r, 180)), parallel(0, h)).Points[0]
+	if math.Abs(pt.Pos.Z-0.25016) > 5e-6 { // issue 2, section 4, "Frames"
+		t.Errorf("z = %.6f, want +0.25016", pt.Pos.Z)
+	}
+	if want := r - math.Sqrt(r*r-h*h); math.Abs(pt.Pos.Z-want) > roundOff { // sphere sag, closed form
+		t.Errorf("z = %.15g, want the sag %.15g", pt.Pos.Z, want)
+	}
+	if pt.Pos.Y != h || pt.Dir.Y >= 0 || pt.Dir.Z <= 0 {
+		t.Errorf("unfolded hit %+v: want height %g kept and a ray going on downstream towards the axis", pt, h)
+	}
+}
+
+// The law of reflection off a plane, unfolded through that plane, is the identity: a flat mirror
+// leaves every ray on its straight line, whatever the turn (common practice of unfolding).
+func TestFlatMirrorLeavesRaysUnchanged(t *testing.T) {
+	rays := []Start{
+		parallel(0, 0), parallel(3, -2),
+		{Pos: Vec{1, 2, 0}, Dir: Unit(Vec{0.05, -0.08, 1})},
+		{Pos: Vec{-4, 1, 0}, Dir: Unit(Vec{-0.1, 0.02, 1})},
+	}
+	for _, turn := range []float64{90, -90, 45, -30, 150, 180} {
+		p := path(mirror(60, 0, turn), plane("S", 140, inf))
+		for i, s := range rays {
+			t.Run(fmt.Sprintf("turn %g ray %d", turn, i), func(t *testing.T) {
+				r := mustTrace(t, p, s)
+				end := last(r)
+				want := Add(s.Pos, Scale(140/s.Dir.Z, s.Dir))
+				if d := Norm(Sub(Vec{end.Pos.X, end.Pos.Y, 140}, want)); d > 1e-11 {
+					t.Errorf("at the screen %+v, straight line gives %+v", end.Pos, want)
+				}
+				if d := Norm(Sub(end.Dir, Unit(s.Dir))); d > roundOff {
+					t.Errorf("dir %+v, want %+v", end.Dir, Unit(s.Dir))
+				}
+			})
+		}
+	}
+}
+
+// A ray parallel to the axis at height h meets a concave sphere of radius R where sin θ = h/R
+// (θ measured at the centre). It reflects at angle θ to the normal, so the reflected ray makes
+// 2θ with the axis; the triangle centre - hit point - crossing is isosceles with two angles θ,
+// so the crossing lies R/(2 cos θ) from the centre, i.e. R(1 - 1/(2 cos θ)) from the vertex
+// (derived from the law of reflection; the paraxial limit is R/2, e.g. Hecht, Optics, §5.4).
+func TestConcaveMirrorExactAxialCrossing(t *testing.T) {
+	const r = 200.0
+	p := path(mirror(30, r, 180))
+	for _, h := range []float64{0.5, 5, 20, 50, 80, 120, 140} {
+		t.Run(fmt.Sprint("h=", h), func(t *testing.T) {
+			pt := mustTrace(t, p, parallel(0, h)).Points[0]
+			th := math.Asin(h / r)
+			want := r * (1 - 1/(2*math.Cos(th)))
+			if got := crossY(pt); relErr(got, want) > tightRel {
+				t.Errorf("crosses the axis %.12g mm after the vertex, want %.12g", got, want)
+			}
+		})
+	}
+	// Past h = R sin 45° the reflected ray (at 2θ > 90° to the axis) runs back towards the source.
+	if r := Trace(p, 0, parallel(0, 150), nil); r.Status != optics.RayMissed || r.Surface != 0 {
+		t.Errorf("ray at 150 mm: %s at %d (%s), want missed at the mirror", r.Status, r.Surface, r.Reason)
+	}
+}
+
+// Coddington's equations for a spherical mirror met at incidence i (Coddington 1829; the form
+// recalled from memory and as issue 2 states it): the tangential focus lies at f·cos i and the
+// sagittal at f / cos i, f = R/2. The exact trace at small aperture finds them where fans of rays in the
+// table plane (tangential) and in the vertical plane (sagittal) cross the chief ray.
+func TestCoddingtonFociOfTiltedConcaveMirror(t *testing.T) {
+	const r, incDeg, h = 200.0, 20.0, 1e-3
+	f, cosI := r/2, math.Cos(incDeg*math.Pi/180)
+	for _, turn := range []float64{180 - 2*incDeg, -(180 - 2*incDeg)} {
+		p := path(mirror(40, r, turn))
+		t.Run(fmt.Sprint("turn ", turn), func(t *testing.T) {
+			chief := mustTrace(t, p, parallel(0, 0)).Points[0]
+			if Norm(chief.Pos) > roundOff || Norm(Sub(chief.Dir, Vec{0, 0, 1})) > roundOff {
+				t.Fatalf("chief ray %+v does not leave along the axis", chief)
+			}
+			// Coma moves the crossing of one ray by ~h; the symmetric pair cancels it.
+			tan := (crossY(mustTrace(t, p, parallel(0, h)).Points[0]) + crossY(mustTrace(t, p, parallel(0, -h)).Points[0])) / 2
+			sag := (crossX(mustTrace(t, p, parallel(h, 0)).Points[0]) + crossX(mustTrace(t, p, parallel(-h, 0)).Points[0])) / 2
+			if relErr(tan, f*cosI) > limitRel {
+				t.Errorf("tangential focus %.8g mm, Coddington f cos i = %.8g", tan, f*cosI)
+			}
+			if relErr(sag, f/cosI) > limitRel {
+				t.Errorf("sagittal focus %.8g mm, Coddington f / cos i = %.8g", sag, f/cosI)
+			}
+		})
+	}
+}
+
+// A beam of radius h meets a plane tilted by i in an ellipse of semi-axes h (across the tilt) and
+// h / cos i (along it): the projection of a circle onto an inclined plane (common practice for
+// sizing fold mirrors). So a 45° fold mirror of clear radius 10 passes a vertical offset of 9.9
+// but clips a table-plane offset of 7.1 (10.04 on the mirror).
+func TestTiltedMirrorClearAperture(t *testing.T) {
+	m := mirror(50, 0, 90)
+	m.SemiAperture = 10
+	p := path(m, plane("S", 100, inf))
+	cases := []struct {
+		x, y float64
+		want string
+	}{
+		{9.9, 0, optics.RayOK}, {10.1, 0, optics.RayClipped},
+		{0, 7.0, optics.RayOK}, {0, -7.0, optics.RayOK}, // 9.90 on the mirror
+		{0, 7.1, optics.RayClipped}, {0, -7.1, optics.RayClipped}, // 10.04 on the mirror
+	}
+	for _, c := range cases {
+		r := Trace(p, 0, parallel(c.x, c.y), nil)
+		if r.Status != c.want {
+			t.Errorf("ray at (%g, %g): %s (%s), want %s", c.x, c.y, r.Status, r.Reason, c.want)
+		}
+		if c.want == optics.RayClipped && r.Surface != 0 {
+			t.Errorf("ray at (%g, %g) stopped at surface %d, want 0", c.x, c.y, r.Surface)
+		}
+	}
+}

@@ -1,0 +1,100 @@
+package trace
+
+import (
+	"fmt"
+	"math"
+	"strconv"
+
+	"raytable/optics"
+)
+
+// RaySpec is one ray the report traces: where it starts, at which wavelength, and its paraxial
+// twin (tangential height and slope dy/dz at the source plane).
+type RaySpec struct {
+	Name      string
+	K         int     // wavelength index into Path.WavelengthsNM
+	Field     string  // "0.5 deg" or "1.5 mm" for fan rays, "" for explicit rays
+	Pupil     float64 // -1..1 across the pupil for fan rays, 0 for explicit rays
+	Start     Start
+	ParaxialY float64
+	ParaxialU float64
+}
+
+// Rays lists the rays of a bench in report order: the explicit rays first (named explicit[0],
+// explicit[1], ... and traced at the primary wavelength), then, for each field and each
+// wavelength, a meridional fan of Source.FanRayCount() rays across the pupil from -1 to 1.
+//
+// A collimated source's fan is a bundle of parallel rays at the field angle a, at heights
+// pupil·semi_diameter on the source plane, direction ∝ (0, tan a, 1). A point source's fan leaves
+// the object point (0, h, 0) at angles pupil·asin(NA) in the table plane; its paraxial twin has
+// slope pupil·NA, so the marginal ray has u = NA.
+func Rays(b *optics.Bench, p *optics.Path) []RaySpec {
+	src := &b.Source
+	n := src.FanRayCount()
+	if n < 0 {
+		n = 0
+	}
+	var fields []float64
+	unit, point := "deg", src.Kind == optics.SourcePoint
+	if point {
+		fields, unit = src.ObjectHeightsMM, "mm"
+	} else {
+		fields = src.FieldAnglesDeg
+	}
+	if len(fields) == 0 {
+		fields = []float64{0}
+	}
+	specs := make([]RaySpec, 0, len(src.Rays)+len(fields)*len(p.WavelengthsNM)*n)
+
+	for i, r := range src.Rays {
+		u := math.Tan(r.AngleDeg * math.Pi / 180)
+		specs = append(specs, RaySpec{
+			Name: fmt.Sprintf("explicit[%d]", i),
+			Start: Start{
+				Pos: Vec{r.XMM, r.HeightMM, 0},
+				Dir: Unit(Vec{math.Tan(r.XAngleDeg * math.Pi / 180), u, 1}),
+			},
+			ParaxialY: r.HeightMM,
+			ParaxialU: u,
+		})
+	}
+
+	semi, na := 0.0, 0.0
+	if src.SemiDiameterMM != nil {
+		semi = *src.SemiDiameterMM
+	}
+	if src.NA != nil {
+		na = *src.NA
+	}
+	digits := len(strconv.Itoa(max(n-1, 0)))
+	for _, f := range fields {
+		fs := strconv.FormatFloat(f, 'g', -1, 64)
+		for k, wl := range p.WavelengthsNM {
+			ws := strconv.FormatFloat(wl, 'g', -1, 64)
+			for j := range n {
+				pupil := 0.0
+				if n > 1 {
+					pupil = -1 + 2*float64(j)/float64(n-1)
+				}
+				spec := RaySpec{
+					Name:  fmt.Sprintf("fan %s%s %snm %0*d", fs, unit, ws, digits, j),
+					K:     k,
+					Field: fs + " " + unit,
+					Pupil: pupil,
+				}
+				if point {
+					theta := pupil * math.Asin(math.Min(na, 1))
+					spec.Start = Start{Pos: Vec{0, f, 0}, Dir: Vec{0, math.Sin(theta), math.Cos(theta)}}
+					spec.ParaxialY, spec.ParaxialU = f, pupil*na
+				} else {
+					u := math.Tan(f * math.Pi / 180)
+					y := pupil * semi
+					spec.Start = Start{Pos: Vec{0, y, 0}, Dir: Unit(Vec{0, u, 1})}
+					spec.ParaxialY, spec.ParaxialU = y, u
+				}
+				specs = append(specs, spec)
+			}
+		}
+	}
+	return specs
+}

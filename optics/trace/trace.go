@@ -1,0 +1,150 @@
+package trace
+
+import (
+	"fmt"
+	"math"
+
+	"raytable/optics"
+)
+
+// Start is a ray at the source plane (z = 0 of the path, in air): its position and its unit
+// direction. Trace normalises Dir anyway.
+type Start struct {
+	Pos, Dir Vec
+}
+
+// Point is a ray at one surface: Pos relative to the surface vertex in the frame of the leaving
+// axis, Dir the unit direction it leaves with. At the surface where a ray is clipped or totally
+// reflected, Dir is the direction it arrived with (unfolded), since it goes no further.
+type Point struct {
+	Surface int // index into Path.Surfaces
+	Pos     Vec
+	Dir     Vec
+}
+
+// Result is what became of one ray.
+type Result struct {
+	Status  string  // optics.RayOK, RayClipped, RayTIR or RayMissed
+	Surface int     // index of the surface where the ray ended (a dump, a clip, TIR, a miss); -1 if it passed every surface
+	Reason  string  // plain words; empty when the ray passed every surface
+	Points  []Point // one per surface reached, in order; a missed surface has none
+}
+
+// Trace follows ray s at wavelength index k through p. It appends the hits to buf[:0] and returns
+// them in Result.Points; it allocates nothing when cap(buf) >= len(p.Surfaces) and the ray passes
+// (the reason of a stopped ray is formatted on the spot).
+func Trace(p *optics.Path, k int, s Start, buf []Point) Result {
+	pts := buf[:0]
+	if k < 0 || k >= len(p.WavelengthsNM) {
+		return Result{Status: optics.RayMissed, Surface: -1, Points: pts,
+			Reason: fmt.Sprintf("wavelength index %d is outside the %d wavelengths of the path", k, len(p.WavelengthsNM))}
+	}
+	dn := Norm(s.Dir)
+	if !(dn > 0) || math.IsInf(dn, 0) || !finite(s.Pos) || s.Dir.Z <= 0 {
+		return Result{Status: optics.RayMissed, Surface: -1, Points: pts,
+			Reason: "the ray does not start towards the path (its direction must point downstream)"}
+	}
+	pos, dir := s.Pos, Scale(1/dn, s.Dir)
+	prevZ := 0.0
+	for i := range p.Surfaces {
+		sf := &p.Surfaces[i]
+		p0 := Vec{pos.X, pos.Y, pos.Z - (sf.PathMM - prevZ)}
+		prevZ = sf.PathMM
+		stop := func(status, reason string) Result {
+			return Result{Status: status, Surface: i, Reason: reason, Points: pts}
+		}
+		switch sf.Kind {
+		case optics.Reflecting:
+			n0 := mirrorNormal(sf.TurnRad)
+			hit, miss := intersect(p0, dir, n0, sf.Curvature)
+			if miss != hitOK {
+				return stop(optics.RayMissed, missReason(sf, miss))
+			}
+			// Clear aperture on the mirror: distance from the normal through the vertex.
+			r := Norm(Sub(hit, Scale(Dot(hit, n0), n0)))
+			out := reflect(hit, n0) // into the leaving (unfolded) frame
+			if r > sf.SemiAperture {
+				pts = append(pts, Point{Surface: i, Pos: out, Dir: dir})
+				return stop(optics.RayClipped, clipReason(sf, r))
+			}
+			d := reflect(reflect(dir, normal(hit, n0, sf.Curvature)), n0)
+			pts = append(pts, Point{Surface: i, Pos: out, Dir: d})
+			if d.Z <= 0 {
+				return stop(optics.RayMissed, "the ray leaves "+where(sf)+" backwards, against the path")
+			}
+			pos, dir = out, d
+
+		case optics.Refracting:
+			axis := Vec{0, 0, 1}
+			hit, miss := intersect(p0, dir, axis, sf.Curvature)
+			if miss != hitOK {
+				return stop(optics.RayMissed, missReason(sf, miss))
+			}
+			if r := math.Hypot(hit.X, hit.Y); r > sf.SemiAperture {
+				pts = append(pts, Point{Surface: i, Pos: hit, Dir: dir})
+				return stop(optics.RayClipped, clipReason(sf, r))
+			}
+			d, ok := refract(dir, normal(hit, axis, sf.Curvature), p.IndexBefore(i, k), sf.Index[k])
+			if !ok {
+				pts = append(pts, Point{Surface: i, Pos: hit, Dir: dir})
+				return stop(optics.RayTIR, "total internal reflection at "+where(sf))
+			}
+			pts = append(pts, Point{Surface: i, Pos: hit, Dir: d})
+			if d.Z <= 0 {
+				return stop(optics.RayMissed, "the ray leaves "+where(sf)+" backwards, against the path")
+			}
+			pos, dir = hit, d
+
+		default: // Thin and Plane: a flat plane at the vertex
+			hit, miss := intersect(p0, dir, Vec{0, 0, 1}, 0)
+			if miss != hitOK {
+				return stop(optics.RayMissed, missReason(sf, miss))
+			}
+			if r := math.Hypot(hit.X, hit.Y); r > sf.SemiAperture {
+				pts = append(pts, Point{Surface: i, Pos: hit, Dir: dir})
+				return stop(optics.RayClipped, clipReason(sf, r))
+			}
+			if sf.Kind == optics.Thin && sf.FocalMM != 0 && !math.IsInf(sf.FocalMM, 0) {
+				// An ideal thin lens changes the slopes dx/dz and dy/dz by -x/f and -y/f.
+				dir = Unit(Vec{dir.X/dir.Z - hit.X/sf.FocalMM, dir.Y/dir.Z - hit.Y/sf.FocalMM, 1})
+			}
+			pts = append(pts, Point{Surface: i, Pos: hit, Dir: dir})
+			if sf.Stops {
+				return stop(optics.RayOK, "absorbed by the beam dump "+sf.ID)
+			}
+			pos = hit
+		}
+	}
+	return Result{Status: optics.RayOK, Surface: -1, Points: pts}
+}
+
+func finite(v Vec) bool {
+	return !math.IsNaN(v.X+v.Y+v.Z) && !math.IsInf(v.X+v.Y+v.Z, 0)
+}
+
+// where names a surface for a reason sentence: "face 1 of L1" for lens faces, the id otherwise.
+func where(s *optics.Surface) string {
+	if s.Kind == optics.Refracting {
+		return fmt.Sprintf("face %d of %s", s.Face, s.ID)
+	}
+	return s.ID
+}
+
+func clipReason(s *optics.Surface, r float64) string {
+	from := "from the axis"
+	if s.Kind == optics.Reflecting {
+		from = "from the mirror's centre"
+	}
+	return fmt.Sprintf("outside the %.2f mm clear diameter of %s (ray %.2f mm %s)", 2*s.SemiAperture, where(s), r, from)
+}
+
+func missReason(s *optics.Surface, m missKind) string {
+	switch m {
+	case missParallel:
+		return "the ray runs parallel to " + where(s) + " and never meets it"
+	case missSphere:
+		return fmt.Sprintf("the ray passes outside the sphere of %s (radius %.2f mm)", where(s), 1/s.Curvature)
+	default:
+		return fmt.Sprintf("the ray meets the sphere of %s (radius %.2f mm) only beyond its rim", where(s), 1/s.Curvature)
+	}
+}
