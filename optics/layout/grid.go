@@ -54,7 +54,7 @@ func holeCount(sizeMM, offsetMM, pitchMM float64) int {
 		return 0
 	}
 	n := int(math.Floor((sizeMM-offsetMM)/pitchMM)) + 1
-	if offsetMM+float64(n-1)*pitchMM >= sizeMM { // a hole exactly on the far edge is not a hole
+	for n > 0 && offsetMM+float64(n-1)*pitchMM >= sizeMM-touchMM { // a hole on the far edge is not a hole
 		n--
 	}
 	return n
