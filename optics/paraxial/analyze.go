@@ -184,21 +184,33 @@ func heightAt(p *optics.Path, k int, plane Plane, r Ray, surface int) float64 {
 	return Trace(p, k, plane, r)[surface].Y
 }
 
+// farMM is the distance beyond which a pupil counts as at infinity: a chief ray whose slope is
+// rounding noise would otherwise put it 1e15 mm away. No bench comes near a thousand kilometres.
+const farMM = 1e9
+
 // pupils fills the entrance and exit pupils from the chief ray's axis crossings in object space
 // (air, before the first optical vertex) and image space (after the last).
 func pupils(res *Result, p *optics.Path, k, first, last int) {
 	v := &res.Values
 	zFirst := p.Surfaces[first].PathMM
 	n := p.IndexBefore(first, k)
-	if c := res.ChiefStart; c.NU != 0 {
-		z := -c.Y * n / c.NU // source plane to the crossing
+	if z, ok := axisCrossing(res.ChiefStart, n); ok {
 		v.EntrancePupilMM = ptr(z - zFirst)
 		v.EntrancePupilRadiusMM = ptr(math.Abs(At(res.MarginalStart, z, n).Y))
 	}
 	nImg := p.Surfaces[last].Index[k]
-	if c := res.Chief[last]; c.NU != 0 {
-		d := -c.Y * nImg / c.NU
+	if d, ok := axisCrossing(res.Chief[last], nImg); ok {
 		v.ExitPupilMM = ptr(d)
 		v.ExitPupilRadiusMM = ptr(math.Abs(At(res.Marginal[last], d, nImg).Y))
 	}
+}
+
+// axisCrossing is how far along the axis a ray, in a medium of index n, crosses it; ok is false
+// when it runs parallel to the axis (the crossing is at infinity).
+func axisCrossing(r Ray, n float64) (float64, bool) {
+	if r.NU == 0 {
+		return 0, false
+	}
+	d := -r.Y * n / r.NU
+	return d, math.Abs(d) < farMM
 }
