@@ -100,3 +100,19 @@ func TestTotalInternalReflectionBeyondCriticalAngle(t *testing.T) {
 		})
 	}
 }
+
+// The wavelength index picks the medium's index at that wavelength: the same ray bends less in
+// the lower index (Snell's law again, per wavelength).
+func TestWavelengthIndexSelectsMedium(t *testing.T) {
+	f := face(10, 0, 0)
+	f.Index = []float64{1.5, 1.6}
+	p := &optics.Path{WavelengthsNM: []float64{700, 400}, Surfaces: []optics.Surface{f}}
+	th := 30 * math.Pi / 180
+	s := Start{Dir: Vec{0, math.Sin(th), math.Cos(th)}}
+	for k, n := range f.Index {
+		r := Trace(p, k, s, nil)
+		if got := n * r.Points[0].Dir.Y; math.Abs(got-math.Sin(th)) > roundOff {
+			t.Errorf("k=%d: n sin θ2 = %.15g, want sin 30° = 0.5", k, got)
+		}
+	}
+}
