@@ -65,7 +65,7 @@ func Analyze(b *optics.Bench, p *optics.Path, k int, plane Plane) Result {
 		axial.NU = *src.NA
 	}
 	axialTrace := Trace(p, k, plane, axial)
-	stop, ratio := limitingSurface(p, axialTrace)
+	stop, ratio := limitingSurface(p, axialTrace, plane)
 	scale := 1.0
 	if stop >= 0 && ratio > 1+stopMargin {
 		res.StopSurface = stop
@@ -122,11 +122,11 @@ func Analyze(b *optics.Bench, p *optics.Path, k int, plane Plane) Result {
 // limitingSurface returns the surface where the axial ray fills the largest fraction of the
 // clear aperture, and that fraction; -1 when no surface up to the first dump has a finite
 // aperture.
-func limitingSurface(p *optics.Path, axial []Ray) (int, float64) {
+func limitingSurface(p *optics.Path, axial []Ray, plane Plane) (int, float64) {
 	best, ratio := -1, 0.0
 	for i := range p.Surfaces {
 		s := &p.Surfaces[i]
-		if a := s.SemiAperture; a > 0 && !math.IsInf(a, 1) {
+		if a := BeamSemiAperture(s, plane); a > 0 && !math.IsInf(a, 1) {
 			if r := math.Abs(axial[i].Y) / a; r > ratio {
 				best, ratio = i, r
 			}
@@ -136,6 +136,17 @@ func limitingSurface(p *optics.Path, axial []Ray) (int, float64) {
 		}
 	}
 	return best, ratio
+}
+
+// BeamSemiAperture is the largest ray height, measured across the beam in the given plane, that a
+// surface lets through. A mirror's clear aperture is measured on the mirror, perpendicular to its
+// normal; met at incidence i, a beam of half-width a·cos i in the plane of incidence (the
+// tangential plane) already spans it, since its footprint is stretched by 1/cos i along the tilt.
+func BeamSemiAperture(s *optics.Surface, plane Plane) float64 {
+	if s.Kind == optics.Reflecting && plane == Tangential {
+		return s.SemiAperture * math.Cos(s.IncidenceRad)
+	}
+	return s.SemiAperture
 }
 
 // largestField is the field of largest magnitude, with its sign: tan(angle) for a collimated
