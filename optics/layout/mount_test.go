@@ -1,0 +1,91 @@
+package layout
+
+import (
+	"math"
+	"testing"
+
+	"raytable/optics"
+)
+
+func TestFootprints(t *testing.T) {
+	cases := []struct {
+		name          string
+		bench         *optics.Bench
+		index         int
+		cx, cy        float64
+		width, depth  float64
+		axis          float64
+		corner0X, c0Y float64 // first corner: centre + depth/2 along the axis - width/2 across it
+	}{
+		// Common practice defaults: a 25.4 mm thin lens in a holder 15 mm wider and 18 mm deep.
+		{"thin lens", bench(100, 100, 0, thin("L1", 50)), 0, 150, 100, 40.4, 18, 0, 159, 79.8},
+		// A thick lens's mount is centred between its first and last vertex.
+		{"thick lens", bench(100, 100, 90, optics.Element{ID: "L1", Type: optics.TypeLens, GapMM: 50,
+			FacesMM: []*float64{f(40), f(-40)}, ThicknessesMM: []float64{20}, Materials: []string{"fused-silica"}, DiameterMM: f(25.4)}),
+			0, 100, 160, 40.4, 26, 90, 120.2, 173},
+		// A 90° fold mirror's mount is aligned with the mirror: its normal bisects the turn, heading 135°,
+		// so the square's corner 0 sits on the +y diagonal (rotation identity: cos 45° = sin 45° = √2/2).
+		{"fold mirror", bench(100, 100, 0, mirror("M1", 100, 90)), 0, 200, 100, 40.4, 40.4, 135,
+			200, 100 + 20.2*math.Sqrt2},
+		// A -90° fold: the normal points back and down, 225°, and corner 0 sits on the -x diagonal.
+		{"fold mirror clockwise", bench(100, 300, 0, mirror("M1", 100, -90)), 0, 200, 300, 40.4, 40.4, 225,
+			200 - 20.2*math.Sqrt2, 300},
+		// A retro mirror (180°) faces straight back at the beam.
+		{"retro mirror", bench(100, 100, 0, mirror("M1", 100, 180)), 0, 200, 100, 40.4, 40.4, 180, 179.8, 120.2},
+		// A mount given in the bench file wins over the default.
+		{"mount override", bench(100, 100, 0, func() optics.Element {
+			e := thin("L1", 50)
+			e.Mount = &optics.Mount{WidthMM: 60, DepthMM: 10}
+			return e
+		}()), 0, 150, 100, 60, 10, 0, 155, 70},
+		{"iris", bench(100, 100, 0, optics.Element{ID: "A1", Type: optics.TypeAperture, GapMM: 10, DiameterMM: f(3)}), 0, 110, 100, 40, 12, 0, 116, 80},
+		{"wide iris", bench(100, 100, 0, optics.Element{ID: "A1", Type: optics.TypeAperture, GapMM: 10, DiameterMM: f(30)}), 0, 110, 100, 50, 12, 0, 116, 75},
+		{"screen", bench(100, 100, 0, optics.Element{ID: "S", Type: optics.TypeScreen, GapMM: 10, WidthMM: f(8.8)}), 0, 110, 100, 28.8, 30, 0, 125, 85.6},
+		{"dump", bench(100, 100, 0, plane("D", optics.TypeDump, 10)), 0, 110, 100, 30, 30, 0, 125, 85},
+	}
+	for _, c := range cases {
+		t.Run(c.name, func(t *testing.T) {
+			fp := Footprints(c.bench, Walk(c.bench))[c.index]
+			if !near(fp.Center.X, c.cx, posTolMM) || !near(fp.Center.Y, c.cy, posTolMM) {
+				t.Errorf("centre (%g, %g), want (%g, %g)", fp.Center.X, fp.Center.Y, c.cx, c.cy)
+			}
+			if fp.WidthMM != c.width || fp.DepthMM != c.depth || !near(fp.AxisDeg, c.axis, 1e-9) {
+				t.Errorf("%g x %g at %g°, want %g x %g at %g°", fp.WidthMM, fp.DepthMM, fp.AxisDeg, c.width, c.depth, c.axis)
+			}
+			if !near(fp.Corners[0].X, c.corner0X, posTolMM) || !near(fp.Corners[0].Y, c.c0Y, posTolMM) {
+				t.Errorf("corner 0 (%g, %g), want (%g, %g)", fp.Corners[0].X, fp.Corners[0].Y, c.corner0X, c.c0Y)
+			}
+			// Self-consistency: opposite corners are a diagonal apart, sqrt(w² + d²).
+			diag := fp.Corners[0].sub(fp.Corners[2]).norm()
+			if !near(diag, math.Hypot(c.width, c.depth), posTolMM) {
+				t.Errorf("diagonal %g, want %g", diag, math.Hypot(c.width, c.depth))
+			}
+		})
+	}
+}
+
+func TestConvexOverlap(t *testing.T) {
+	// Geometry identity: the diamond |x| + |y| <= 10 and the square [a, a+4]² meet exactly when 2a < 10.
+	diamond := []Point{{10, 0}, {0, 10}, {-10, 0}, {0, -10}}
+	sq := func(a float64) []Point { return []Point{{a, a}, {a + 4, a}, {a + 4, a + 4}, {a, a + 4}} }
+	cases := []struct {
+		name string
+		a, b []Point
+		want bool
+	}{
+		{"square inside the bounding box but outside the diamond", diamond, sq(6), false},
+		{"square across the diamond's edge", diamond, sq(4), true},
+		{"square touching the edge", diamond, sq(5), false},
+		{"segment through the diamond", diamond, []Point{{-20, 1}, {20, 1}}, true},
+		{"segment past the tip", diamond, []Point{{-20, 11}, {20, 11}}, false},
+		{"point inside", diamond, []Point{{1, 1}}, true},
+	}
+	for _, c := range cases {
+		if got := convexOverlap(c.a, c.b); got != c.want {
+			t.Errorf("%s: overlap %v, want %v", c.name, got, c.want)
+		}
+		if got := convexOverlap(c.b, c.a); got != c.want {
+			t.Errorf("%s (swapped): overlap %v, want %v", c.name, got, c.want)
+		}
+	}
+}
