@@ -26,7 +26,7 @@ func traceRays(b *optics.Bench, p *optics.Path, places []optics.ElementPlace) ([
 
 	for _, spec := range specs {
 		res := trace.Trace(p, spec.K, spec.Start, buf)
-		paraxial.TraceInto(p, spec.K, paraxial.Tangential, paraxial.Ray{Y: spec.ParaxialY, NU: spec.ParaxialU}, twin)
+		twin = paraxial.TraceInto(twin, p, spec.K, paraxial.Tangential, paraxial.Ray{Y: spec.ParaxialY, NU: spec.ParaxialU})
 		ray := optics.Ray{
 			Name:         spec.Name,
 			WavelengthNM: p.WavelengthsNM[spec.K],
