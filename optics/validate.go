@@ -1,0 +1,238 @@
+package optics
+
+import (
+	"math"
+	"slices"
+	"strconv"
+	"strings"
+)
+
+// Limits that Validate enforces.
+const (
+	MinWavelengthNM = 200.0   // shortest accepted wavelength
+	MaxWavelengthNM = 20000.0 // longest accepted wavelength
+	MaxLengthMM     = 1e6     // largest accepted magnitude of any length; more is a slip, not a bench
+	MaxFanRays      = 201     // most rays in one meridional fan
+	MaxIDLength     = 40      // longest element id
+	MaxIndex        = 5.0     // largest accepted refractive index (index or nd)
+	MaxHeadingDeg   = 360.0   // largest accepted |source heading|
+)
+
+// Validate checks every rule of the bench format on a bench built in Go (for example from the web
+// form, which can produce NaN and Inf where JSON cannot). It returns nil or an *Error with code
+// EInvalid listing every problem at once, each naming its JSON path, the rule and the numbers.
+func Validate(b *Bench) error {
+	return Invalid(validationProblems(b))
+}
+
+// checker collects problems for Validate.
+type checker struct {
+	reader
+	b            *Bench
+	badMaterials map[string]bool // user materials that have problems of their own
+}
+
+func validationProblems(b *Bench) []Problem {
+	if b == nil {
+		return []Problem{{Message: "no bench given"}}
+	}
+	v := &checker{b: b, badMaterials: map[string]bool{}}
+	if b.Format != FormatBenchV1 {
+		v.add("format", "must be %q, got %q", FormatBenchV1, b.Format)
+	}
+	v.wavelengths()
+	v.table()
+	v.source()
+	v.materials()
+	v.elements()
+	return v.problems
+}
+
+// finite reports whether x is a finite number, and says so when it is not.
+func (v *checker) finite(path string, x float64) bool {
+	if math.IsNaN(x) || math.IsInf(x, 0) {
+		v.add(path, "must be a finite number, got %v", x)
+		return false
+	}
+	return true
+}
+
+// length checks a length in mm: finite and at most MaxLengthMM in magnitude.
+func (v *checker) length(path string, x float64) bool {
+	if !v.finite(path, x) {
+		return false
+	}
+	if math.Abs(x) > MaxLengthMM {
+		v.add(path, "%s mm is out of range: lengths are limited to %s mm in magnitude", fmtNum(x), fmtNum(MaxLengthMM))
+		return false
+	}
+	return true
+}
+
+// positive checks a length that must be > 0.
+func (v *checker) positive(path string, x float64) bool {
+	if !v.length(path, x) {
+		return false
+	}
+	if x <= 0 {
+		v.add(path, "must be greater than 0 mm, got %s", fmtNum(x))
+		return false
+	}
+	return true
+}
+
+// nonNegative checks a length that must be >= 0.
+func (v *checker) nonNegative(path string, x float64) bool {
+	if !v.length(path, x) {
+		return false
+	}
+	if x < 0 {
+		v.add(path, "must be at least 0 mm, got %s", fmtNum(x))
+		return false
+	}
+	return true
+}
+
+// angle checks an angle whose tangent is taken: finite and strictly inside ±90°.
+func (v *checker) angle(path string, deg float64) {
+	if v.finite(path, deg) && math.Abs(deg) >= 90 {
+		v.add(path, "angle %s° must lie strictly between -90° and 90°", fmtNum(deg))
+	}
+}
+
+func (v *checker) wavelengths() {
+	if len(v.b.WavelengthsNM) == 0 {
+		v.add("wavelengths_nm", "at least one wavelength is required")
+		return
+	}
+	for i, w := range v.b.WavelengthsNM {
+		p := index("wavelengths_nm", i)
+		if v.finite(p, w) && (w < MinWavelengthNM || w > MaxWavelengthNM) {
+			v.add(p, "%s nm is outside the accepted range %s-%s nm", fmtNum(w), fmtNum(MinWavelengthNM), fmtNum(MaxWavelengthNM))
+		}
+	}
+}
+
+// wavelengthsValid reports whether every wavelength passed its checks (so indices can be evaluated).
+func (v *checker) wavelengthsValid() bool {
+	for _, w := range v.b.WavelengthsNM {
+		if !(w >= MinWavelengthNM && w <= MaxWavelengthNM) {
+			return false
+		}
+	}
+	return len(v.b.WavelengthsNM) > 0
+}
+
+func (v *checker) table() {
+	t := &v.b.Table
+	switch t.Grid {
+	case GridMetric25, GridImperial1, GridNone:
+	default:
+		v.add("table.grid", "must be %q, %q or %q, got %q", GridMetric25, GridImperial1, GridNone, t.Grid)
+	}
+	okW := v.positive("table.width_mm", t.WidthMM)
+	okD := v.positive("table.depth_mm", t.DepthMM)
+	v.nonNegative("table.beam_height_mm", t.BeamHeightMM)
+	if t.HoleOffsetMM != nil && v.nonNegative("table.hole_offset_mm", *t.HoleOffsetMM) && okW && okD {
+		if size := min(t.WidthMM, t.DepthMM); *t.HoleOffsetMM >= size {
+			v.add("table.hole_offset_mm", "%s mm must be less than the table size (%s mm, the smaller of width and depth)",
+				fmtNum(*t.HoleOffsetMM), fmtNum(size))
+		}
+	}
+}
+
+func (v *checker) source() {
+	s := &v.b.Source
+	v.length("source.x_mm", s.XMM)
+	v.length("source.y_mm", s.YMM)
+	if v.finite("source.heading_deg", s.HeadingDeg) && math.Abs(s.HeadingDeg) > MaxHeadingDeg {
+		v.add("source.heading_deg", "%s° is out of range: use a heading between -360° and 360°", fmtNum(s.HeadingDeg))
+	}
+	present := map[string]bool{
+		"semi_diameter_mm":  s.SemiDiameterMM != nil,
+		"field_angles_deg":  s.FieldAnglesDeg != nil,
+		"na":                s.NA != nil,
+		"object_heights_mm": s.ObjectHeightsMM != nil,
+	}
+	switch s.Kind {
+	case SourceCollimated:
+		v.stray("source", present, kindKeys[SourceCollimated], " for a collimated source")
+		if s.SemiDiameterMM == nil {
+			v.add("source.semi_diameter_mm", "a collimated source needs semi_diameter_mm, the radius of the ray bundle")
+		} else {
+			v.positive("source.semi_diameter_mm", *s.SemiDiameterMM)
+		}
+		for i, a := range s.FieldAnglesDeg {
+			v.angle(index("source.field_angles_deg", i), a)
+		}
+	case SourcePoint:
+		v.stray("source", present, kindKeys[SourcePoint], " for a point source")
+		if s.NA == nil {
+			v.add("source.na", "a point source needs na, the numerical aperture of the traced cone")
+		} else if v.finite("source.na", *s.NA) && (*s.NA <= 0 || *s.NA >= 1) {
+			v.add("source.na", "numerical aperture %s must lie strictly between 0 and 1", fmtNum(*s.NA))
+		}
+		for i, h := range s.ObjectHeightsMM {
+			v.length(index("source.object_heights_mm", i), h)
+		}
+	default:
+		v.add("source.kind", "must be %q or %q, got %q", SourceCollimated, SourcePoint, s.Kind)
+	}
+	if s.FanRays != nil && (*s.FanRays < 1 || *s.FanRays > MaxFanRays) {
+		v.add("source.fan_rays", "must be between 1 and %d rays, got %d", MaxFanRays, *s.FanRays)
+	}
+	for i, r := range s.Rays {
+		p := index("source.rays", i)
+		v.length(field(p, "height_mm"), r.HeightMM)
+		v.angle(field(p, "angle_deg"), r.AngleDeg)
+		v.length(field(p, "x_mm"), r.XMM)
+		v.angle(field(p, "x_angle_deg"), r.XAngleDeg)
+	}
+	if bm := s.Beam; bm != nil {
+		v.positive("source.beam.waist_radius_mm", bm.WaistRadiusMM)
+		v.length("source.beam.waist_at_mm", bm.WaistAtMM)
+		if bm.M2 != nil && v.finite("source.beam.m2", *bm.M2) && *bm.M2 < 1 {
+			v.add("source.beam.m2", "M² is at least 1 for any real beam, got %s", fmtNum(*bm.M2))
+		}
+	}
+}
+
+// stray reports fields that are set but belong to another element type or source kind.
+func (v *checker) stray(path string, present map[string]bool, allowed []string, why string) {
+	keys := sortedKeys(present)
+	for _, k := range keys {
+		if present[k] && !slices.Contains(allowed, k) {
+			v.add(field(path, k), "unknown field%s (allowed: %s)", why, strings.Join(allowed, ", "))
+		}
+	}
+}
+
+// fmtNum formats a number compactly: plain decimals without trailing zeros, exponent form only for
+// very large or very small magnitudes.
+func fmtNum(x float64) string {
+	if a := math.Abs(x); a == 0 || (a >= 1e-4 && a < 1e15) {
+		return strconv.FormatFloat(x, 'f', -1, 64)
+	}
+	return strconv.FormatFloat(x, 'g', -1, 64)
+}
+
+// fmtRound formats a computed value to 4 significant digits, for messages.
+func fmtRound(x float64) string {
+	r, err := strconv.ParseFloat(strconv.FormatFloat(x, 'g', 4, 64), 64)
+	if err != nil {
+		return fmtNum(x)
+	}
+	return fmtNum(r)
+}
+
+// plainName reports whether s uses only letters, digits, '-', '_' and '.'.
+func plainName(s string) bool {
+	for _, c := range s {
+		switch {
+		case c >= 'a' && c <= 'z', c >= 'A' && c <= 'Z', c >= '0' && c <= '9', c == '-', c == '_', c == '.':
+		default:
+			return false
+		}
+	}
+	return true
+}

@@ -1,0 +1,199 @@
+package optics
+
+import (
+	"math"
+	"strings"
+	"unicode/utf8"
+)
+
+func (v *checker) elements() {
+	els := v.b.Elements
+	if len(els) > MaxElements {
+		v.add("elements", "has %d elements; at most %d are allowed", len(els), MaxElements)
+	}
+	firstUse := map[string]int{}
+	checkedMedia := map[string]bool{}
+	for i := range els {
+		e := &els[i]
+		p := index("elements", i)
+		v.elementID(p, e.ID, i, firstUse)
+		if v.length(field(p, "gap_mm"), e.GapMM) && e.GapMM < 0 {
+			v.add(field(p, "gap_mm"), "gap %s mm is negative: negative gaps are not supported, since elements follow one another along the beam",
+				fmtNum(e.GapMM))
+		}
+		if e.Mount != nil {
+			v.positive(field(p, "mount.width_mm"), e.Mount.WidthMM)
+			v.positive(field(p, "mount.depth_mm"), e.Mount.DepthMM)
+		}
+		allowed, known := typeKeys[e.Type]
+		if !known {
+			v.add(field(p, "type"), "unknown element type %q: use one of %s", e.Type, strings.Join(elementTypes, ", "))
+			continue
+		}
+		v.stray(p, map[string]bool{
+			"faces_mm":       e.FacesMM != nil,
+			"thicknesses_mm": e.ThicknessesMM != nil,
+			"materials":      e.Materials != nil,
+			"focal_mm":       e.FocalMM != nil,
+			"radius_mm":      e.RadiusMM != nil,
+			"turn_deg":       e.TurnDeg != nil,
+			"diameter_mm":    e.DiameterMM != nil,
+			"width_mm":       e.WidthMM != nil,
+		}, append(append([]string{}, elementKeys...), allowed...), " for type "+e.Type)
+		diameterOK := e.DiameterMM == nil || v.positive(field(p, "diameter_mm"), *e.DiameterMM)
+		switch e.Type {
+		case TypeLens:
+			v.lens(p, e, diameterOK, checkedMedia)
+		case TypeThinLens:
+			fp := field(p, "focal_mm")
+			switch {
+			case e.FocalMM == nil:
+				v.add(fp, "a thin lens needs focal_mm")
+			case v.length(fp, *e.FocalMM) && *e.FocalMM == 0:
+				v.add(fp, "focal length must not be 0 mm")
+			}
+		case TypeMirror:
+			v.mirror(p, e, diameterOK)
+		case TypeScreen:
+			if e.WidthMM != nil {
+				v.positive(field(p, "width_mm"), *e.WidthMM)
+			}
+		}
+	}
+}
+
+// elementID checks that an id is non-empty, short, plain and not used before.
+func (v *checker) elementID(p, id string, i int, firstUse map[string]int) {
+	ip := field(p, "id")
+	switch {
+	case id == "":
+		v.add(ip, "must not be empty")
+		return
+	case utf8.RuneCountInString(id) > MaxIDLength:
+		v.add(ip, "id is %d characters long; at most %d are allowed", utf8.RuneCountInString(id), MaxIDLength)
+	case !plainName(id):
+		v.add(ip, "id %q may use only letters, digits, '-', '_' and '.'", id)
+	}
+	if j, dup := firstUse[id]; dup {
+		v.add(ip, "duplicate id %q: already used by elements[%d]", id, j)
+		return
+	}
+	firstUse[id] = i
+}
+
+func (v *checker) lens(p string, e *Element, diameterOK bool, checkedMedia map[string]bool) {
+	k := len(e.FacesMM)
+	if k < 2 {
+		v.add(field(p, "faces_mm"), "a lens needs at least 2 faces, got %d", k)
+	}
+	if k >= 2 && len(e.ThicknessesMM) != k-1 {
+		v.add(field(p, "thicknesses_mm"), "a lens with %d faces needs %d thicknesses, got %d", k, k-1, len(e.ThicknessesMM))
+	}
+	if k >= 2 && len(e.Materials) != k-1 {
+		v.add(field(p, "materials"), "a lens with %d faces needs %d materials, got %d", k, k-1, len(e.Materials))
+	}
+	semi := math.Inf(1)
+	if e.DiameterMM != nil && diameterOK {
+		semi = *e.DiameterMM / 2
+	}
+	faceOK := make([]bool, k)
+	for i, r := range e.FacesMM {
+		fp := index(field(p, "faces_mm"), i)
+		faceOK[i] = v.radius(fp, r, semi, "face")
+	}
+	for i, t := range e.ThicknessesMM {
+		tp := index(field(p, "thicknesses_mm"), i)
+		if !v.length(tp, t) {
+			continue
+		}
+		if t <= 0 {
+			v.add(tp, "thickness must be greater than 0 mm, got %s", fmtNum(t))
+			continue
+		}
+		// Without a usable clear aperture (diameter_mm given but wrong) the edge rule has no height.
+		if i+1 < k && faceOK[i] && faceOK[i+1] && diameterOK {
+			v.edge(tp, i, t, e.FacesMM[i], e.FacesMM[i+1], semi)
+		}
+	}
+	for i, name := range e.Materials {
+		v.lensMaterial(index(field(p, "materials"), i), name, checkedMedia)
+	}
+}
+
+// radius checks a face or mirror radius: nil is flat; otherwise finite, non-zero, within range
+// and at least the semi-diameter in magnitude (a sphere has no surface beyond its radius).
+func (v *checker) radius(path string, r *float64, semi float64, what string) bool {
+	if r == nil {
+		return true
+	}
+	if !v.length(path, *r) {
+		return false
+	}
+	if *r == 0 {
+		v.add(path, "radius 0 mm is not allowed: use null for a flat %s", what)
+		return false
+	}
+	if !math.IsInf(semi, 1) && math.Abs(*r) < semi {
+		v.add(path, "radius %s mm is smaller than the semi-diameter %s mm", fmtNum(math.Abs(*r)), fmtNum(semi))
+		return false
+	}
+	return true
+}
+
+// edge checks that faces i and i+1, a centre thickness t apart, do not meet inside the clear
+// aperture. The edge thickness at height h is t + s2(h) - s1(h), with s the sag of each face
+// (positive downstream). With no clear aperture given the faces must stay apart as far out as both
+// spheres exist, min(|R1|, |R2|). The edge thickness is monotonic in h for any pair of spheres (its
+// derivative keeps one sign), so checking the outermost height suffices.
+func (v *checker) edge(path string, i int, t float64, r1, r2 *float64, semi float64) {
+	h := semi
+	if math.IsInf(semi, 1) {
+		h = math.Inf(1)
+		for _, r := range []*float64{r1, r2} {
+			if r != nil {
+				h = min(h, math.Abs(*r))
+			}
+		}
+		if math.IsInf(h, 1) {
+			return // two flat faces never meet
+		}
+	}
+	edge := t + sag(r2, h) - sag(r1, h)
+	if edge > 0 {
+		return
+	}
+	if math.IsInf(semi, 1) {
+		v.add(path, "faces %d and %d intersect within %s mm of the axis (edge thickness there %s mm): give diameter_mm for the clear aperture or make the lens thicker",
+			i, i+1, fmtNum(h), fmtRound(edge))
+		return
+	}
+	v.add(path, "faces %d and %d meet inside the clear aperture: the edge thickness at the clear-aperture radius %s mm is %s mm and must be greater than 0",
+		i, i+1, fmtNum(h), fmtRound(edge))
+}
+
+// sag is the axial displacement of a spherical face at height h, positive downstream, 0 for a flat
+// face. It uses the rationalised form h²/(R + sign(R)·√(R² − h²)), equal to R − sign(R)·√(R² − h²)
+// but free of cancellation when h ≪ |R| (common practice in lens design codes).
+func sag(r *float64, h float64) float64 {
+	if r == nil {
+		return 0
+	}
+	R := *r
+	return h * h / (R + math.Copysign(math.Sqrt(max(R*R-h*h, 0)), R))
+}
+
+func (v *checker) mirror(p string, e *Element, diameterOK bool) {
+	tp := field(p, "turn_deg")
+	if e.TurnDeg == nil {
+		v.add(tp, "a mirror needs turn_deg, how far it turns the beam on the table")
+	} else if v.finite(tp, *e.TurnDeg) {
+		if t := math.Abs(*e.TurnDeg); t == 0 || t > 180 {
+			v.add(tp, "turn %s° must have a magnitude above 0° and at most 180°", fmtNum(*e.TurnDeg))
+		}
+	}
+	semi := math.Inf(1)
+	if e.DiameterMM != nil && diameterOK {
+		semi = *e.DiameterMM / 2
+	}
+	v.radius(field(p, "radius_mm"), e.RadiusMM, semi, "mirror")
+}
