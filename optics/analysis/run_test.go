@@ -209,3 +209,22 @@ func BenchmarkRunDemo(b *testing.B) {
 		}
 	}
 }
+
+// TestCollidingMounts: two lens mounts 8 mm apart along the beam, each 18 mm deep by default
+// (common practice for a 1 in lens mount), must be reported as overlapping.
+func TestCollidingMounts(t *testing.T) {
+	data, err := os.ReadFile("../../testdata/collide-bench.json")
+	if err != nil {
+		t.Fatal(err)
+	}
+	r := mustRun(t, string(data))
+	var found bool
+	for _, w := range r.Warnings {
+		if w.Code == "mounts-overlap" && w.Element == "RL1" {
+			found = true
+		}
+	}
+	if !found {
+		t.Errorf("no mounts-overlap warning for RL1/RL2; warnings: %+v", r.Warnings)
+	}
+}
