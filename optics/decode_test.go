@@ -344,3 +344,14 @@ func FuzzDecode(f *testing.F) {
 		}
 	})
 }
+
+// BenchmarkDecode measures reading and validating the demo bench.
+func BenchmarkDecode(b *testing.B) {
+	data := readDemo(b)
+	b.ReportAllocs()
+	for b.Loop() {
+		if _, err := Decode(data); err != nil {
+			b.Fatal(err)
+		}
+	}
+}

@@ -89,3 +89,14 @@ func TestEncodeEmptyElements(t *testing.T) {
 		t.Error(err)
 	}
 }
+
+// BenchmarkEncode measures writing the demo bench in canonical form.
+func BenchmarkEncode(b *testing.B) {
+	bench := decodeDemo(b)
+	b.ReportAllocs()
+	for b.Loop() {
+		if _, err := Encode(bench); err != nil {
+			b.Fatal(err)
+		}
+	}
+}
