@@ -22,6 +22,22 @@
 // differ only behind tilted curved mirrors (Coddington powers, see paraxial.Power). The primary
 // wavelength (the first of the bench) is used.
 //
+// # What Propagate reports
+//
+//   - One row per element (screens, apertures and dumps too): the beam arriving at its first face
+//     and leaving its last, R per the formula above (nil at a waist), and the fraction its clear
+//     apertures pass (the product over a lens's faces; 1 without a clear aperture). Rows after a
+//     dump are still computed, as if the beam went on, but give no warnings.
+//   - Every real waist in air from the source (a waist on the source plane included) to the last
+//     element's last vertex. A waist on an element's plane belongs to the gap ending there; `after`
+//     names the element before that gap. Waists inside an element's glass, virtual ones, those
+//     upstream of the source and those beyond the last element are left out.
+//   - The envelope at SampleCount+1 even steps plus every vertex, from the source to the last
+//     vertex plus a tail of a tenth of the path (at least 10 mm; none after a final dump).
+//
+// Clipping does not change the beam downstream: the Gaussian model continues unchanged, and the
+// beam-clipped warning says so.
+//
 // # Clipping
 //
 // The fraction of a Gaussian beam with 1/e² radii wx, wy that a centred circle of radius a passes
@@ -35,5 +51,8 @@
 //
 // SafetyWarnings works from the paraxial ray bundle of the source and needs no beam: ghost foci of
 // the Fresnel back-reflections off every refracting face, and foci inside or next to glass.
-// Propagate adds the same focus checks for the beam's own waists, and clipping warnings.
+// Propagate adds the same focus checks for the beam's own waists (a waist counts as a focus when
+// the beam converges into it, so the source's own waist at the source plane does not), and
+// clipping warnings (below PassFraction = 99 %, common practice), each with the clear diameter
+// that would pass 99 %.
 package beam

@@ -123,3 +123,8 @@ func row(r *optics.BeamReport, id string) optics.BeamAt {
 	}
 	return optics.BeamAt{}
 }
+
+type pathAndBench struct {
+	p *optics.Path
+	b *optics.Bench
+}

@@ -74,13 +74,14 @@ func Propagate(b *optics.Bench, p *optics.Path) (*optics.BeamReport, []optics.Wa
 
 	rep := &optics.BeamReport{WavelengthNM: lam, M2: m2, Elements: make([]optics.BeamAt, 0, len(p.Spans))}
 	var warns []optics.Warning
+	lit := litStretches(p) // surfaces before index lit reach light; nothing passes a dump
 	for _, sp := range p.Spans {
 		row, faces, ok := elementRow(p, g, &t, &s, sp)
 		if !ok {
 			continue
 		}
 		rep.Elements = append(rep.Elements, row)
-		if row.Transmitted < PassFraction {
+		if row.Transmitted < PassFraction && sp.First < lit {
 			warns = append(warns, clipWarning(row, faces))
 		}
 	}

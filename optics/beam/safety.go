@@ -58,7 +58,7 @@ func SafetyWarnings(b *optics.Bench, p *optics.Path) []optics.Warning {
 				continue
 			}
 			if code, id, where, hit := focusHazard(p, x, z); hit {
-				ws.add(code, id, plane, fmt.Sprintf("the paraxial focus of the source's ray bundle lies %s", where))
+				ws.add(code, id, id, plane, fmt.Sprintf("the paraxial focus of the source's ray bundle lies %s", where))
 			}
 		}
 		for j := range arrive {
@@ -67,7 +67,7 @@ func SafetyWarnings(b *optics.Bench, p *optics.Path) []optics.Warning {
 			}
 			if where, hit := backReflection(p, st, j, arrive[j], plane); hit {
 				s := &p.Surfaces[j]
-				ws.add(CodeBackReflection, s.ID, plane, fmt.Sprintf("the reflection off face %d of %s goes back upstream and comes to a focus %s", s.Face, s.ID, where))
+				ws.add(CodeBackReflection, s.ID, fmt.Sprintf("%s face %d", s.ID, s.Face), plane, fmt.Sprintf("the reflection off face %d of %s goes back upstream and comes to a focus %s", s.Face, s.ID, where))
 			}
 		}
 	}
@@ -103,17 +103,17 @@ func crossing(x stretch, r paraxial.Ray) (float64, bool) {
 func focusHazard(p *optics.Path, x stretch, z float64) (code, id, where string, hit bool) {
 	if x.Glass() {
 		prev := &p.Surfaces[x.I-1]
-		return CodeFocusInGlass, prev.ID, fmt.Sprintf("inside the glass of %s, %.3g mm after its face %d (path %.1f mm)", prev.ID, z-x.Z0, prev.Face, z), true
+		return CodeFocusInGlass, prev.ID, fmt.Sprintf("inside the glass of %s, %s after its face %d (path %.1f mm)", prev.ID, mm(z-x.Z0), prev.Face, z), true
 	}
 	best := math.Inf(1)
 	if x.I > 0 && p.Surfaces[x.I-1].Kind == optics.Refracting && z-x.Z0 <= nearGlassMM {
 		s := &p.Surfaces[x.I-1]
 		best = z - x.Z0
-		code, id, where = CodeFocusNearGlass, s.ID, fmt.Sprintf("%.3g mm after face %d of %s (path %.1f mm)", best, s.Face, s.ID, z)
+		code, id, where = CodeFocusNearGlass, s.ID, fmt.Sprintf("%s after face %d of %s (path %.1f mm)", mm(best), s.Face, s.ID, z)
 	}
 	if x.I < len(p.Surfaces) && p.Surfaces[x.I].Kind == optics.Refracting && x.Z1-z <= nearGlassMM && x.Z1-z < best {
 		s := &p.Surfaces[x.I]
-		code, id, where = CodeFocusNearGlass, s.ID, fmt.Sprintf("%.3g mm before face %d of %s (path %.1f mm)", x.Z1-z, s.Face, s.ID, z)
+		code, id, where = CodeFocusNearGlass, s.ID, fmt.Sprintf("%s before face %d of %s (path %.1f mm)", mm(x.Z1-z), s.Face, s.ID, z)
 	}
 	return code, id, where, code != ""
 }
@@ -162,9 +162,9 @@ func backHazard(p *optics.Path, x stretch, z float64, ei int) (string, bool) {
 	if d := math.Abs(z); d <= backReflectionReachMM {
 		best = d
 		if z < 0 {
-			where = fmt.Sprintf("%.3g mm behind the source plane, inside the source", d)
+			where = fmt.Sprintf("%s behind the source plane, inside the source", mm(d))
 		} else {
-			where = fmt.Sprintf("%.3g mm in front of the source (path %.1f mm)", d, z)
+			where = fmt.Sprintf("%s in front of the source (path %.1f mm)", mm(d), z)
 		}
 	}
 	for m := range p.Surfaces {
@@ -173,7 +173,7 @@ func backHazard(p *optics.Path, x stretch, z float64, ei int) (string, bool) {
 			break
 		}
 		if d := math.Abs(z - u.PathMM); d <= backReflectionReachMM && d < best {
-			best, where = d, fmt.Sprintf("%.3g mm from %s (path %.1f mm)", d, u.ID, z)
+			best, where = d, fmt.Sprintf("%s from %s (path %.1f mm)", mm(d), u.ID, z)
 		}
 	}
 	return where, where != ""
@@ -184,7 +184,7 @@ func backHazard(p *optics.Path, x stretch, z float64, ei int) (string, bool) {
 // leaves out the source's waist at the source plane.
 func beamFocusWarnings(p *optics.Path, g gaussian, st []stretch, t, s *planeTrace) []optics.Warning {
 	var ws warnSet
-	for _, x := range st {
+	for _, x := range st[:litStretches(p)] {
 		for _, pl := range []struct {
 			plane paraxial.Plane
 			tr    *planeTrace
@@ -194,21 +194,40 @@ func beamFocusWarnings(p *optics.Path, g gaussian, st []stretch, t, s *planeTrac
 				continue
 			}
 			if code, id, where, hit := focusHazard(p, x, w.zMM); hit {
-				ws.add(code, id, pl.plane, fmt.Sprintf("the beam comes to a waist of radius %.3g µm %s", 1000*w.radiusMM, where))
+				ws.add(code, id, id, pl.plane, fmt.Sprintf("the beam comes to a waist of radius %.3g µm %s", 1000*w.radiusMM, where))
 			}
 		}
 	}
 	return ws.list()
 }
 
-// warnSet collects warnings, one per code and element, noting which planes found it.
+// litStretches is the number of stretches light reaches: up to the first dump, or all of them.
+func litStretches(p *optics.Path) int {
+	for i := range p.Surfaces {
+		if p.Surfaces[i].Stops {
+			return i + 1
+		}
+	}
+	return len(p.Surfaces) + 1
+}
+
+// mm writes a distance for a message, without a long tail of digits for tiny ones.
+func mm(d float64) string {
+	if math.Abs(d) < 0.01 {
+		return "less than 0.01 mm"
+	}
+	return fmt.Sprintf("%.3g mm", d)
+}
+
+// warnSet collects warnings, one per code and key (an element, or a face), noting which planes
+// found it.
 type warnSet struct {
 	ws     []optics.Warning
 	planes []string
 	index  map[[2]string]int
 }
 
-func (w *warnSet) add(code, id string, plane paraxial.Plane, msg string) {
+func (w *warnSet) add(code, id, key string, plane paraxial.Plane, msg string) {
 	name := "tangential"
 	if plane == paraxial.Sagittal {
 		name = "sagittal"
@@ -216,14 +235,14 @@ func (w *warnSet) add(code, id string, plane paraxial.Plane, msg string) {
 	if w.index == nil {
 		w.index = map[[2]string]int{}
 	}
-	key := [2]string{code, id}
-	if i, ok := w.index[key]; ok {
+	k := [2]string{code, key}
+	if i, ok := w.index[k]; ok {
 		if w.planes[i] != name && w.planes[i] != "tangential and sagittal" {
 			w.planes[i] = "tangential and sagittal"
 		}
 		return
 	}
-	w.index[key] = len(w.ws)
+	w.index[k] = len(w.ws)
 	w.ws = append(w.ws, optics.Warning{Code: code, Element: id, Message: msg})
 	w.planes = append(w.planes, name)
 }

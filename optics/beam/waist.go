@@ -96,15 +96,24 @@ func samples(p *optics.Path, g gaussian, st []stretch, t, s *planeTrace) []optic
 		}
 	}
 	zEnd := end + tail
+	// Merge the even grid with the vertices (both already in order), dropping repeats.
 	zs := make([]float64, 0, SampleCount+1+len(p.Surfaces))
+	push := func(z float64) {
+		if len(zs) == 0 || z > zs[len(zs)-1] {
+			zs = append(zs, z)
+		}
+	}
+	i := 0
 	for j := 0; j <= SampleCount; j++ {
-		zs = append(zs, zEnd*float64(j)/SampleCount)
+		z := zEnd * float64(j) / SampleCount
+		for ; i < len(p.Surfaces) && p.Surfaces[i].PathMM <= z; i++ {
+			push(p.Surfaces[i].PathMM)
+		}
+		push(z)
 	}
-	for i := range p.Surfaces {
-		zs = append(zs, p.Surfaces[i].PathMM)
+	for ; i < len(p.Surfaces); i++ {
+		push(p.Surfaces[i].PathMM)
 	}
-	slices.Sort(zs)
-	zs = slices.Compact(zs)
 	out := make([]optics.BeamSample, 0, len(zs))
 	k := 0
 	for _, z := range zs {
