@@ -124,10 +124,10 @@ func focusHazard(p *optics.Path, x stretch, z float64) (code, id, where string, 
 func backReflection(p *optics.Path, st []stretch, j int, arriving paraxial.Ray, plane paraxial.Plane) (string, bool) {
 	s := &p.Surfaces[j]
 	n := p.IndexBefore(j, 0)
-	// Seen from the incoming light the face is a mirror of curvature -c in a medium of index n;
-	// unfolded, a mirror of curvature c_m has reduced power 2·n·c_m.
-	// Its power is P = 2·n·(-c), and the matrix [1 0; -P 1] has C = 2·n·c. Unfolded, heights stay
-	// continuous and the light meets the earlier surfaces in reverse order with unchanged powers.
+	// Seen from the incoming light the face is a mirror of curvature c_m = -c (+ concave) in a
+	// medium of index n. Unfolded, such a mirror has reduced power P = 2·n·c_m, so its matrix
+	// [1 0; -P 1] has C = 2·n·c. Heights stay continuous, and going back the light meets the
+	// earlier surfaces in reverse order with unchanged powers (curvature and indices both swap).
 	r := paraxial.Matrix{A: 1, C: 2 * n * s.Curvature, D: 1}.Apply(arriving)
 	for k := j - 1; k >= -1; k-- {
 		zA := p.Surfaces[k+1].PathMM
