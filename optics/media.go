@@ -12,7 +12,7 @@ import (
 // names the rule that failed; the caller adds the JSON path.
 func (b *Bench) Medium(name string) (material.Medium, error) {
 	if spec, ok := b.Materials[name]; ok {
-		return spec.Medium("materials." + name)
+		return spec.Medium(materialPath(name))
 	}
 	m, err := material.Lookup(name)
 	if err != nil {
