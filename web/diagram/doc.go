@@ -1,0 +1,24 @@
+// Package diagram draws raytable's results as SVG: the side view (the unfolded optical path along z
+// with the table-plane height y), the table view (the folded path on the breadboard seen from above)
+// and the printable plan (the table view in millimetres, true size when printed at 100 %).
+//
+// It only turns computed numbers into pictures: millimetres to pixels, layout of labels, legends and
+// scale bars. Every ray point, beam radius, position and warning comes from an optics.Report; the
+// package never traces, refracts or propagates anything. Drawing a lens face as a circular arc from
+// its radius and semi-diameter, or rotating a mount footprint to its heading, is geometry of the
+// picture, not physics.
+//
+// Output is deterministic: coordinates are written with fixed decimals (one for pixel drawings, two
+// for the plan), everything is drawn in slice order, never map order, and non-finite numbers are
+// skipped before they reach the document. The drawings use no ids, no <style> and no script, so
+// several of them can be inlined in one HTML page without clashing; the plot areas are clipped with
+// nested <svg> viewports instead of clip paths.
+//
+// Text: the pinned svgo writes the content of <text> and <title> through encoding/xml's escaper, so
+// labels (element ids, titles and warning messages are user input) are passed to it unescaped; the
+// few attribute values that carry user text (aria-label) are escaped here with html.EscapeString.
+// Escaping twice would show "&lt;" to the reader, so each string is escaped exactly once.
+//
+// Colours of wavelengths come from WavelengthColor, our own piecewise-linear approximation of the
+// visible spectrum with dark tones outside it; see its comment.
+package diagram
