@@ -1,0 +1,124 @@
+package server
+
+import (
+	"bytes"
+	"net/http"
+	"strings"
+
+	"github.com/go-chi/chi/v5"
+
+	"raytable/optics"
+	"raytable/optics/analysis"
+	"raytable/server/store"
+	"raytable/web/diagram"
+	"raytable/web/view"
+)
+
+// Diagram sizes in px: the bench page, and the larger presentation view.
+const (
+	pageSideWidthPX    = 960
+	pageSideHeightPX   = 360
+	pageTableWidthPX   = 960
+	presentSideWidthPX = 1400
+	presentSideHeightX = 520
+	presentTableWidth  = 1400
+)
+
+// design is one stored revision, decoded.
+type design struct {
+	rev   store.Revision
+	bench *optics.Bench
+}
+
+// load finds the revision named in the URL. A malformed id cannot exist, so it is 404 like a
+// missing one, without asking the store.
+func (s *Server) load(r *http.Request) (design, error) {
+	return s.loadID(chi.URLParam(r, "id"))
+}
+
+func (s *Server) loadID(id string) (design, error) {
+	if !store.ValidID(id) {
+		return design{}, optics.Errorf(optics.ENotFound, "there is no design %q", id)
+	}
+	rev, err := s.store.Get(id)
+	if err != nil {
+		return design{}, err
+	}
+	b, err := optics.Decode(rev.Bench)
+	if err != nil {
+		// A stored bench passed Decode when it was saved; failing now is a bug, not the user's input.
+		return design{}, optics.Errorf(optics.EInternal, "stored revision %s no longer decodes: %v", id, err)
+	}
+	return design{rev: rev, bench: b}, nil
+}
+
+// analyze computes a bench's report. A valid bench always gives one; an EInvalid here means the
+// bench came from a form and broke a rule.
+func analyze(b *optics.Bench) (*optics.Report, error) {
+	return analysis.Run(b)
+}
+
+// inlineSVG drops the XML prolog and leading comments of a standalone SVG so that it can sit
+// inside an HTML page.
+func inlineSVG(svg []byte) string {
+	if i := bytes.Index(svg, []byte("<svg")); i > 0 {
+		svg = svg[i:]
+	}
+	return strings.TrimSpace(string(svg))
+}
+
+// resultOptions choose the drawing sizes of a result.
+type resultOptions struct {
+	sideWidth, sideHeight, tableWidth int
+	paraxial                          bool
+}
+
+var (
+	pageResult    = resultOptions{sideWidth: pageSideWidthPX, sideHeight: pageSideHeightPX, tableWidth: pageTableWidthPX}
+	presentResult = resultOptions{sideWidth: presentSideWidthPX, sideHeight: presentSideHeightX, tableWidth: presentTableWidth}
+)
+
+// result draws a computed bench: the side and table views inline, and the numbers.
+func result(b *optics.Bench, r *optics.Report, o resultOptions) view.Result {
+	return view.Result{
+		SideSVG:  inlineSVG(diagram.Side(r, sideOptions(r, o.sideWidth, o.sideHeight, o.paraxial))),
+		TableSVG: inlineSVG(diagram.Table(b, r, diagram.TableOptions{WidthPX: o.tableWidth})),
+		Numbers:  numbersPanel(r),
+	}
+}
+
+// links are the addresses of one revision's pages.
+func links(d design, paraxial bool) view.Links {
+	base := "/r/" + d.rev.ID
+	l := view.Links{
+		Share: base, Edit: base, View: base + "/view", History: base + "/history",
+		BenchJSON: base + "/bench.json", ReportJSON: base + "/report.json",
+		SideSVG: base + "/side.svg", TableSVG: base + "/table.svg", PlanSVG: base + "/plan.svg",
+		Paraxial: base + "?paraxial=1", ParaxialOn: paraxial,
+	}
+	if paraxial {
+		l.Paraxial = base
+		l.SideSVG += "?paraxial=1"
+	}
+	if d.rev.Parent != "" {
+		l.CompareParent = "/compare?a=" + d.rev.Parent + "&b=" + d.rev.ID
+	}
+	return l
+}
+
+// when writes a revision's time for people, in UTC so that shared links read the same everywhere.
+func when(d design) string { return d.rev.Created.UTC().Format("2006-01-02 15:04 UTC") }
+
+func title(b *optics.Bench) string {
+	if strings.TrimSpace(b.Title) == "" {
+		return "Untitled bench"
+	}
+	return b.Title
+}
+
+// sideOptions are the side view's options at a size, with the automatic vertical exaggeration.
+func sideOptions(r *optics.Report, width, height int, paraxial bool) diagram.SideOptions {
+	o := diagram.SideOptions{WidthPX: width, HeightPX: height, ShowParaxial: paraxial}
+	o.Exaggeration = autoExaggeration(r, o)
+	return o
+}

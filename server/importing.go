@@ -1,0 +1,130 @@
+package server
+
+import (
+	"encoding/json"
+	"io"
+	"mime"
+	"net/http"
+	"strings"
+
+	"raytable/optics"
+	"raytable/server/demo"
+	"raytable/web/view"
+)
+
+// importBench stores a bench file sent as the request body (JSON) or as a form (file field
+// `bench`, or pasted text in `bench_text`) and answers 303 to the new revision. A bad file answers
+// 400 with every problem named by its path: as JSON to a JSON request, on the start page otherwise.
+func (s *Server) importBench(w http.ResponseWriter, r *http.Request) {
+	mt, _, _ := mime.ParseMediaType(r.Header.Get("Content-Type"))
+	isForm := mt == "multipart/form-data" || mt == "application/x-www-form-urlencoded"
+	data, err := importData(r, isForm)
+	if err == nil && len(strings.TrimSpace(string(data))) == 0 {
+		err = optics.Invalid([]optics.Problem{{Message: "no bench file was given: choose a file or paste its JSON"}})
+	}
+	var b *optics.Bench
+	if err == nil {
+		b, err = optics.Decode(data)
+	}
+	if err != nil {
+		status := statusOf(err)
+		if status == http.StatusUnprocessableEntity {
+			status = http.StatusBadRequest // the body itself is bad
+		}
+		if status >= 500 {
+			s.fail(w, r, err)
+			return
+		}
+		if !isForm {
+			writeJSONError(w, status, err)
+			return
+		}
+		p := view.HomePage{ImportError: problemLines(err)}
+		if len(data) <= maxBodyBytes {
+			p.ImportText = string(data)
+		}
+		s.renderHome(w, r, status, p)
+		return
+	}
+	rev, err := s.storeBench(b, nil, "imported")
+	if err != nil {
+		s.fail(w, r, err)
+		return
+	}
+	http.Redirect(w, r, "/r/"+rev.ID, http.StatusSeeOther)
+}
+
+// importData reads the bench file from the body or the form.
+func importData(r *http.Request, isForm bool) ([]byte, error) {
+	if !isForm {
+		data, err := io.ReadAll(r.Body)
+		if err != nil {
+			return nil, bodyError(err)
+		}
+		return data, nil
+	}
+	if _, err := postedForm(r); err != nil {
+		return nil, err
+	}
+	if r.MultipartForm != nil {
+		if files := r.MultipartForm.File["bench"]; len(files) > 0 && files[0].Size > 0 {
+			f, err := files[0].Open()
+			if err != nil {
+				return nil, bodyError(err)
+			}
+			defer f.Close()
+			data, err := io.ReadAll(io.LimitReader(f, maxBodyBytes+1))
+			if err != nil {
+				return nil, bodyError(err)
+			}
+			return data, nil
+		}
+	}
+	if t := r.PostForm.Get("bench_text"); strings.TrimSpace(t) != "" {
+		return []byte(t), nil
+	}
+	return []byte(r.PostForm.Get("bench")), nil
+}
+
+func problemLines(err error) []string {
+	var lines []string
+	for _, p := range optics.ErrorProblems(err) {
+		lines = append(lines, p.String())
+	}
+	if len(lines) == 0 {
+		lines = []string{err.Error()}
+	}
+	return lines
+}
+
+// jsonError is the body of a failed JSON request.
+type jsonError struct {
+	Error    string           `json:"error"`
+	Problems []optics.Problem `json:"problems,omitempty"`
+}
+
+func writeJSONError(w http.ResponseWriter, status int, err error) {
+	body := jsonError{Error: err.Error(), Problems: optics.ErrorProblems(err)}
+	var e *optics.Error
+	if asOptics(err, &e) && e.Message != "" {
+		body.Error = e.Message
+	}
+	w.Header().Set("Content-Type", "application/json")
+	w.WriteHeader(status)
+	json.NewEncoder(w).Encode(body)
+}
+
+// demo stores a fresh copy of the demo bench and answers 303 to it.
+func (s *Server) demo(w http.ResponseWriter, r *http.Request) {
+	b, err := optics.Decode(demo.Bench)
+	if err != nil {
+		s.fail(w, r, optics.Errorf(optics.EInternal, "the embedded demo bench does not decode: %v", err))
+		return
+	}
+	rev, err := s.storeBench(b, nil, "started from the demo")
+	if err != nil {
+		s.fail(w, r, err)
+		return
+	}
+	http.Redirect(w, r, "/r/"+rev.ID, http.StatusSeeOther)
+}

@@ -1,0 +1,245 @@
+package server
+
+import (
+	"fmt"
+	"math"
+	"sort"
+	"strconv"
+	"strings"
+
+	"raytable/optics"
+	"raytable/web/view"
+)
+
+// num writes a number for people: rounded to five significant digits, without an exponent for
+// everyday sizes.
+func num(v float64) string {
+	if math.IsNaN(v) || math.IsInf(v, 0) {
+		return "—"
+	}
+	r, _ := strconv.ParseFloat(strconv.FormatFloat(v, 'g', 5, 64), 64)
+	if r == 0 {
+		return "0" // also for -0 and values that round to zero
+	}
+	if a := math.Abs(r); a == 0 || (a >= 1e-4 && a < 1e9) {
+		return strconv.FormatFloat(r, 'f', -1, 64)
+	}
+	return strconv.FormatFloat(r, 'g', -1, 64)
+}
+
+func optNum(v *float64) string {
+	if v == nil {
+		return "—"
+	}
+	return num(*v)
+}
+
+func percent(v float64) string { return num(v*100) + " %" }
+
+// systemRow is one system value in both planes.
+type systemRow struct {
+	label string
+	get   func(p *optics.PlaneValues) string
+}
+
+var systemRows = []systemRow{
+	{"EFL (mm)", func(p *optics.PlaneValues) string { return optNum(p.EFLMM) }},
+	{"BFL (mm)", func(p *optics.PlaneValues) string { return optNum(p.BFLMM) }},
+	{"FFL (mm)", func(p *optics.PlaneValues) string { return optNum(p.FFLMM) }},
+	{"front principal plane from the first vertex (mm)", func(p *optics.PlaneValues) string { return optNum(p.FrontPrincipalMM) }},
+	{"rear principal plane from the last vertex (mm)", func(p *optics.PlaneValues) string { return optNum(p.RearPrincipalMM) }},
+	{"image distance from the last vertex (mm)", func(p *optics.PlaneValues) string { return optNum(p.ImageDistanceMM) }},
+	{"magnification", func(p *optics.PlaneValues) string { return optNum(p.Magnification) }},
+	{"angular magnification", func(p *optics.PlaneValues) string { return optNum(p.AngularMagnification) }},
+	{"aperture stop", func(p *optics.PlaneValues) string { return p.ApertureStop }},
+	{"f-number", func(p *optics.PlaneValues) string { return optNum(p.FNumber) }},
+	{"image-side NA", func(p *optics.PlaneValues) string { return optNum(p.ImageNA) }},
+	{"entrance pupil from the first vertex (mm)", func(p *optics.PlaneValues) string { return optNum(p.EntrancePupilMM) }},
+	{"entrance pupil radius (mm)", func(p *optics.PlaneValues) string { return optNum(p.EntrancePupilRadiusMM) }},
+	{"exit pupil from the last vertex (mm)", func(p *optics.PlaneValues) string { return optNum(p.ExitPupilMM) }},
+	{"exit pupil radius (mm)", func(p *optics.PlaneValues) string { return optNum(p.ExitPupilRadiusMM) }},
+	{"image height (mm)", func(p *optics.PlaneValues) string { return optNum(p.ImageHeightMM) }},
+	{"Lagrange invariant (mm)", func(p *optics.PlaneValues) string { return optNum(p.LagrangeInvariant) }},
+}
+
+// numbersPanel lays out a report as the tables of the numbers panel.
+func numbersPanel(r *optics.Report) view.Numbers {
+	var n view.Numbers
+	n.Tables = append(n.Tables, systemTable(r))
+	if len(r.Chromatic) > 1 {
+		n.Tables = append(n.Tables, chromaticTable(r))
+	}
+	n.Tables = append(n.Tables, elementsTable(r), rayStatusTable(r))
+	if r.Beam != nil {
+		n.Tables = append(n.Tables, beamTable(r.Beam), waistTable(r.Beam))
+	}
+	if len(r.Placement) > 0 {
+		n.Tables = append(n.Tables, placementTable(r.Placement))
+	}
+	if len(r.Media) > 0 {
+		n.Tables = append(n.Tables, mediaTable(r.Media))
+	}
+	for _, w := range r.Warnings {
+		n.Warnings = append(n.Warnings, warningText(w))
+	}
+	return n
+}
+
+func warningText(w optics.Warning) string {
+	if w.Element == "" || strings.HasPrefix(w.Message, w.Element) {
+		return w.Message
+	}
+	return w.Element + ": " + w.Message
+}
+
+func systemTable(r *optics.Report) view.Table {
+	t := view.Table{Title: "System", TestID: "system-values", Head: []string{"value", "in the table plane", "across it (sagittal)"}}
+	if !r.System.Optical {
+		t.Note = "The bench has no lens, thin lens or mirror, so it has no system values."
+		return t
+	}
+	tan, sag := &r.System.PlaneValues, &r.System.Sagittal
+	differ := false
+	for _, row := range systemRows {
+		a, b := row.get(tan), row.get(sag)
+		if a == "—" && b == "—" {
+			continue
+		}
+		cells := []string{row.label, a, "same"}
+		if a != b {
+			cells[2] = b
+			differ = true
+		}
+		t.Rows = append(t.Rows, view.Row{Cells: cells, Marked: a != b})
+	}
+	if tan.Afocal {
+		t.Note = "Afocal: parallel light leaves parallel, so there is no focal length."
+	}
+	if !differ {
+		t.Head = t.Head[:2]
+		for i := range t.Rows {
+			t.Rows[i].Cells = t.Rows[i].Cells[:2]
+		}
+		t.Note = strings.TrimSpace(t.Note + " Both planes agree.")
+	}
+	return t
+}
+
+func chromaticTable(r *optics.Report) view.Table {
+	t := view.Table{Title: "At each wavelength", TestID: "chromatic", Head: []string{"wavelength (nm)", "EFL (mm)", "BFL (mm)", "image distance (mm)"}}
+	for _, c := range r.Chromatic {
+		t.Rows = append(t.Rows, view.Row{Cells: []string{num(c.WavelengthNM), optNum(c.EFLMM), optNum(c.BFLMM), optNum(c.ImageDistanceMM)}})
+	}
+	return t
+}
+
+func elementsTable(r *optics.Report) view.Table {
+	t := view.Table{
+		Title: "Elements", TestID: "elements-table",
+		Head: []string{"id", "type", "along the path (mm)", "table x (mm)", "table y (mm)", "heading in → out (°)",
+			"marginal ray (mm)", "chief ray (mm)", "largest ray (mm)", "clear radius (mm)", "use of aperture"},
+	}
+	for _, e := range r.Elements {
+		use := "—"
+		if e.Clearance != nil {
+			use = percent(*e.Clearance)
+		}
+		t.Rows = append(t.Rows, view.Row{
+			Cells: []string{e.ID, e.Type, num(e.PathMM), num(e.TableXMM), num(e.TableYMM),
+				num(e.HeadingInDeg) + " → " + num(e.HeadingOutDeg),
+				num(e.MarginalYMM), num(e.ChiefYMM), num(e.MaxExactYMM), optNum(e.SemiDiameterMM), use},
+			Marked: e.Clearance != nil && *e.Clearance > 1,
+		})
+	}
+	t.Note = "Marked rows: exact rays reach beyond the clear aperture and are cut."
+	return t
+}
+
+// statusWords says what each ray status means.
+var statusWords = map[string]string{
+	optics.RayOK:      "ran through",
+	optics.RayClipped: "cut by an aperture",
+	optics.RayTIR:     "totally reflected inside glass",
+	optics.RayMissed:  "missed a surface",
+}
+
+func rayStatusTable(r *optics.Report) view.Table {
+	t := view.Table{Title: "Exact rays", TestID: "ray-status", Head: []string{"status", "rays", "where they stopped"}}
+	counts := map[string]int{}
+	where := map[string]map[string]int{}
+	for _, ray := range r.Rays {
+		counts[ray.Status]++
+		if ray.StoppedAt != "" {
+			if where[ray.Status] == nil {
+				where[ray.Status] = map[string]int{}
+			}
+			where[ray.Status][ray.StoppedAt]++
+		}
+	}
+	for _, s := range []string{optics.RayOK, optics.RayClipped, optics.RayTIR, optics.RayMissed} {
+		var places []string
+		for id, c := range where[s] {
+			places = append(places, fmt.Sprintf("%s (%d)", id, c))
+		}
+		sort.Strings(places)
+		t.Rows = append(t.Rows, view.Row{Cells: []string{statusWords[s], strconv.Itoa(counts[s]), strings.Join(places, ", ")}, Marked: s != optics.RayOK && counts[s] > 0})
+	}
+	return t
+}
+
+func beamTable(b *optics.BeamReport) view.Table {
+	t := view.Table{
+		Title: fmt.Sprintf("Laser beam at %s nm, M² %s (leaving each element)", num(b.WavelengthNM), num(b.M2)), TestID: "beam-table",
+		Head: []string{"id", "radius in plane (mm)", "radius across (mm)", "wavefront radius in plane (mm)", "wavefront radius across (mm)", "power passed"},
+	}
+	for _, e := range b.Elements {
+		t.Rows = append(t.Rows, view.Row{Cells: []string{e.ID, num(e.WTMM), num(e.WSMM), optNumOr(e.RTMM, "flat"), optNumOr(e.RSMM, "flat"), percent(e.Transmitted)}, Marked: e.Transmitted < 0.99})
+	}
+	return t
+}
+
+func optNumOr(v *float64, none string) string {
+	if v == nil {
+		return none
+	}
+	return num(*v)
+}
+
+func waistTable(b *optics.BeamReport) view.Table {
+	t := view.Table{Title: "Beam waists", TestID: "waists", Head: []string{"after", "along the path (mm)", "radius in plane (mm)", "radius across (mm)", "Rayleigh range in plane (mm)", "Rayleigh range across (mm)"}}
+	for _, w := range b.Waists {
+		after := "the source"
+		if w.After != nil {
+			after = *w.After
+		}
+		t.Rows = append(t.Rows, view.Row{Cells: []string{after, num(w.PathMM), optNum(w.RadiusTMM), optNum(w.RadiusSMM), optNum(w.RayleighTMM), optNum(w.RayleighSMM)}})
+	}
+	if len(b.Waists) == 0 {
+		t.Note = "No waist between the source and the last element."
+	}
+	return t
+}
+
+func placementTable(ps []optics.Placement) view.Table {
+	t := view.Table{Title: "Placement on the breadboard", TestID: "placement", Head: []string{"id", "type", "x (mm)", "y (mm)", "heading (°)", "hole column", "hole row", "offset x (mm)", "offset y (mm)"}}
+	for _, p := range ps {
+		col, row := "—", "—"
+		if p.HoleColumn > 0 {
+			col, row = strconv.Itoa(p.HoleColumn), strconv.Itoa(p.HoleRow)
+		}
+		t.Rows = append(t.Rows, view.Row{Cells: []string{p.ID, p.Type, num(p.TableXMM), num(p.TableYMM), num(p.HeadingDeg), col, row, num(p.OffsetXMM), num(p.OffsetYMM)}})
+	}
+	return t
+}
+
+func mediaTable(ms []optics.MediumIndex) view.Table {
+	t := view.Table{Title: "Media", TestID: "media", Head: []string{"material", "wavelength (nm)", "index", "within its data range"}}
+	for _, m := range ms {
+		in := "yes"
+		if !m.InRange {
+			in = "no"
+		}
+		t.Rows = append(t.Rows, view.Row{Cells: []string{m.Material, num(m.WavelengthNM), strconv.FormatFloat(m.Index, 'f', 6, 64), in}, Marked: !m.InRange})
+	}
+	return t
+}

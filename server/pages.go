@@ -1,0 +1,115 @@
+package server
+
+import (
+	"net/http"
+
+	"raytable/optics"
+	"raytable/web/view"
+)
+
+// recentCount is how many designs the home page lists.
+const recentCount = 12
+
+func (s *Server) home(w http.ResponseWriter, r *http.Request) {
+	s.renderHome(w, r, http.StatusOK, view.HomePage{})
+}
+
+func (s *Server) renderHome(w http.ResponseWriter, r *http.Request, status int, p view.HomePage) {
+	revs, err := s.store.Recent(recentCount)
+	if err != nil {
+		s.fail(w, r, err)
+		return
+	}
+	for _, rev := range revs {
+		p.Recent = append(p.Recent, view.Recent{
+			URL: "/r/" + rev.ID, Title: rev.Summary, Created: rev.Created.UTC().Format("2006-01-02 15:04 UTC"),
+		})
+	}
+	s.render(w, r, status, view.Home(p))
+}
+
+// benchPage shows a revision with its form, diagrams and numbers.
+func (s *Server) benchPage(w http.ResponseWriter, r *http.Request) {
+	d, err := s.load(r)
+	if err != nil {
+		s.fail(w, r, err)
+		return
+	}
+	paraxial := r.URL.Query().Get("paraxial") == "1"
+	rep, err := analyze(d.bench)
+	if err != nil {
+		s.fail(w, r, err)
+		return
+	}
+	o := pageResult
+	o.paraxial = paraxial
+	p := s.benchPageModel(d, paraxial, buildForm(d.rev.ID, d.bench, benchValues(d.bench), nil), result(d.bench, rep, o))
+	s.render(w, r, http.StatusOK, view.Bench(p))
+}
+
+func (s *Server) benchPageModel(d design, paraxial bool, form view.BenchForm, res view.Result) view.BenchPage {
+	return view.BenchPage{ID: d.rev.ID, Title: title(d.bench), Created: when(d), Links: links(d, paraxial), Form: form, Result: res}
+}
+
+// presentPage is the read-only view for showing a design to someone.
+func (s *Server) presentPage(w http.ResponseWriter, r *http.Request) {
+	d, err := s.load(r)
+	if err != nil {
+		s.fail(w, r, err)
+		return
+	}
+	rep, err := analyze(d.bench)
+	if err != nil {
+		s.fail(w, r, err)
+		return
+	}
+	o := presentResult
+	o.paraxial = r.URL.Query().Get("paraxial") == "1"
+	s.render(w, r, http.StatusOK, view.Present(view.PresentPage{
+		ID: d.rev.ID, Title: title(d.bench), Notes: d.bench.Notes, Created: when(d),
+		Links: links(d, o.paraxial), Result: result(d.bench, rep, o),
+	}))
+}
+
+// maxHistory bounds the parent chain shown on one history page.
+const maxHistory = 200
+
+// history walks the parent chain from a revision back to its first ancestor.
+func (s *Server) history(w http.ResponseWriter, r *http.Request) {
+	d, err := s.load(r)
+	if err != nil {
+		s.fail(w, r, err)
+		return
+	}
+	p := view.HistoryPage{ID: d.rev.ID, Title: title(d.bench), Links: links(d, false)}
+	cur := d
+	for step := 0; ; step++ {
+		if step == maxHistory {
+			p.Truncated = true
+			break
+		}
+		hs := view.HistoryStep{ID: cur.rev.ID, URL: "/r/" + cur.rev.ID, Created: when(cur), Title: title(cur.bench), Current: step == 0}
+		if cur.rev.Parent == "" {
+			p.Steps = append(p.Steps, hs)
+			break
+		}
+		parent, err := s.loadID(cur.rev.Parent)
+		if err != nil {
+			if optics.ErrorCode(err) != optics.ENotFound {
+				s.fail(w, r, err)
+				return
+			}
+			hs.Changes = []string{"(its parent is no longer stored)"}
+			p.Steps = append(p.Steps, hs)
+			break
+		}
+		hs.Changes = optics.Diff(parent.bench, cur.bench)
+		if len(hs.Changes) == 0 {
+			hs.Changes = []string{"no change"}
+		}
+		hs.CompareURL = "/compare?a=" + parent.rev.ID + "&b=" + cur.rev.ID
+		p.Steps = append(p.Steps, hs)
+		cur = parent
+	}
+	s.render(w, r, http.StatusOK, view.History(p))
+}

@@ -1,0 +1,148 @@
+package server
+
+import (
+	"bytes"
+	"io"
+	"log/slog"
+	"net/http"
+	"time"
+
+	"github.com/a-h/templ"
+	"github.com/go-chi/chi/v5"
+
+	"raytable/server/store"
+	"raytable/web/static"
+	"raytable/web/view"
+)
+
+// Store keeps immutable revisions. Bolt (server/store) is the file store; Mem is for tests.
+type Store interface {
+	// Put stores a new revision; an id that exists already is an error.
+	Put(rev store.Revision) error
+	// Get returns a revision, or an error with code optics.ENotFound.
+	Get(id string) (store.Revision, error)
+	// Recent returns up to n revisions, newest first.
+	Recent(n int) ([]store.Revision, error)
+}
+
+// Config is what a Server needs. Store is required; the rest have defaults.
+type Config struct {
+	Store  Store
+	Logger *slog.Logger     // default: discard
+	Now    func() time.Time // default: time.Now
+	Random io.Reader        // source of revision ids; default crypto/rand
+}
+
+// Server answers raytable's web requests.
+type Server struct {
+	store  Store
+	log    *slog.Logger
+	now    func() time.Time
+	random io.Reader
+	router chi.Router
+}
+
+// New builds a server and its routes.
+func New(cfg Config) *Server {
+	s := &Server{store: cfg.Store, log: cfg.Logger, now: cfg.Now, random: cfg.Random}
+	if s.log == nil {
+		s.log = slog.New(slog.DiscardHandler)
+	}
+	if s.now == nil {
+		s.now = time.Now
+	}
+	s.router = s.routes()
+	return s
+}
+
+// ServeHTTP makes Server an http.Handler.
+func (s *Server) ServeHTTP(w http.ResponseWriter, r *http.Request) { s.router.ServeHTTP(w, r) }
+
+func (s *Server) routes() chi.Router {
+	r := chi.NewRouter()
+	r.Use(logRequests(s.log), securityHeaders, recoverPanics(s.log, s.failStatus), limitBody(maxBodyBytes))
+	r.NotFound(func(w http.ResponseWriter, r *http.Request) { s.failStatus(w, r, http.StatusNotFound) })
+	r.MethodNotAllowed(func(w http.ResponseWriter, r *http.Request) { s.failStatus(w, r, http.StatusMethodNotAllowed) })
+
+	r.Get("/", s.home)
+	r.Post("/import", s.importBench)
+	r.Get("/demo", s.demo)
+	r.Post("/demo", s.demo)
+	r.Get("/compare", s.compare)
+	r.Handle("/static/*", http.StripPrefix("/static/", staticFiles()))
+	r.Route("/r/{id}", func(r chi.Router) {
+		r.Get("/", s.benchPage)
+		r.Get("/view", s.presentPage)
+		r.Get("/history", s.history)
+		r.Get("/bench.json", s.benchJSON)
+		r.Get("/report.json", s.reportJSON)
+		r.Get("/side.svg", s.sideSVG)
+		r.Get("/table.svg", s.tableSVG)
+		r.Get("/plan.svg", s.planSVG)
+		r.Post("/edit", s.edit)
+		r.Post("/preview", s.preview)
+	})
+	return r
+}
+
+// staticFiles serves the embedded CSS and script. They are small and change with the binary, so
+// browsers revalidate them on each load.
+func staticFiles() http.Handler {
+	fs := http.FileServerFS(static.Files)
+	return http.HandlerFunc(func(w http.ResponseWriter, r *http.Request) {
+		w.Header().Set("Cache-Control", "no-cache")
+		fs.ServeHTTP(w, r)
+	})
+}
+
+// HTTPServer wraps a handler in an http.Server with timeouts, so slow or idle clients cannot hold
+// connections for ever.
+func HTTPServer(h http.Handler, log *slog.Logger) *http.Server {
+	if log == nil {
+		log = slog.New(slog.DiscardHandler)
+	}
+	return &http.Server{
+		Handler:           h,
+		ReadHeaderTimeout: 5 * time.Second,
+		ReadTimeout:       20 * time.Second,
+		WriteTimeout:      60 * time.Second,
+		IdleTimeout:       120 * time.Second,
+		MaxHeaderBytes:    64 << 10,
+		ErrorLog:          slog.NewLogLogger(log.Handler(), slog.LevelWarn),
+	}
+}
+
+// render writes a page with a status. It renders into a buffer first so that a failure midway
+// becomes a clean 500 instead of half a page.
+func (s *Server) render(w http.ResponseWriter, r *http.Request, status int, c templ.Component) {
+	var buf bytes.Buffer
+	if err := c.Render(r.Context(), &buf); err != nil {
+		s.log.Error("render failed", "path", r.URL.Path, "err", err)
+		http.Error(w, "the page could not be drawn", http.StatusInternalServerError)
+		return
+	}
+	w.Header().Set("Content-Type", "text/html; charset=utf-8")
+	w.WriteHeader(status)
+	w.Write(buf.Bytes())
+}
+
+// fail answers an error with its status and an error page; internal errors are logged.
+func (s *Server) fail(w http.ResponseWriter, r *http.Request, err error) {
+	status := statusOf(err)
+	if status >= 500 {
+		s.log.Error("request failed", "method", r.Method, "path", r.URL.Path, "err", err)
+	}
+	s.render(w, r, status, view.Error(errorPage(status, err)))
+}
+
+// failStatus answers with an error page for a bare status.
+func (s *Server) failStatus(w http.ResponseWriter, r *http.Request, status int) {
+	p := errorPage(status, nil)
+	switch status {
+	case http.StatusNotFound:
+		p.Message = "There is nothing at " + r.URL.Path + ". Designs live at links that start with /r/."
+	case http.StatusMethodNotAllowed:
+		p.Message = r.Method + " is not accepted at " + r.URL.Path + "."
+	}
+	s.render(w, r, status, view.Error(p))
+}

@@ -1,0 +1,88 @@
+package server
+
+import (
+	"fmt"
+	"math"
+	"strconv"
+	"strings"
+)
+
+// quantity says how a form field's text becomes a number: which units people may type and what
+// the rule is called in messages.
+type quantity struct {
+	noun  string             // "a length", used as `"abc" is not a length`
+	hint  string             // how to write one, appended to the message
+	units map[string]float64 // unit suffix -> factor to the stored unit; "" is the bare number
+}
+
+// Millimetres per unit for lengths. Inches are exact by definition (25.4 mm).
+var lengthUnits = map[string]float64{
+	"": 1, "mm": 1, "cm": 10, "m": 1000, "um": 1e-3, "µm": 1e-3, "μm": 1e-3,
+	"in": 25.4, "inch": 25.4, "inches": 25.4, `"`: 25.4,
+}
+
+var (
+	length     = quantity{"a length", "use a number in mm or a unit such as 1 in, 2.5 cm", lengthUnits}
+	wavelength = quantity{"a wavelength", "use a number in nm or a unit such as 1.064 um", map[string]float64{
+		"": 1, "nm": 1, "um": 1000, "µm": 1000, "μm": 1000}}
+	angle = quantity{"an angle", "use a number of degrees", map[string]float64{
+		"": 1, "deg": 1, "°": 1}}
+	plain = quantity{"a number", "use a plain number such as 0.1", map[string]float64{"": 1}}
+)
+
+// maxMagnitude is the largest number a field accepts before the bench rules even look at it;
+// anything larger is a slip of the keyboard.
+const maxMagnitude = 1e12
+
+// parse reads one value with an optional unit, e.g. "25.4", "1 in", `1"`, "2.5cm", "500 µm".
+func (q quantity) parse(text string) (float64, error) {
+	s := strings.TrimSpace(text)
+	num, unit := splitUnit(s)
+	factor, ok := q.units[strings.ToLower(unit)]
+	if !ok {
+		factor, ok = q.units[unit]
+	}
+	if num == "" || !ok {
+		return 0, fmt.Errorf("%q is not %s; %s", text, q.noun, q.hint)
+	}
+	v, err := strconv.ParseFloat(num, 64)
+	if err != nil || math.IsNaN(v) || math.IsInf(v, 0) {
+		if ne, isNum := err.(*strconv.NumError); isNum && ne.Err == strconv.ErrRange {
+			return 0, fmt.Errorf("%q is too large to be %s", text, q.noun)
+		}
+		return 0, fmt.Errorf("%q is not %s; %s", text, q.noun, q.hint)
+	}
+	v *= factor
+	if math.Abs(v) > maxMagnitude {
+		return 0, fmt.Errorf("%q is too large to be %s", text, q.noun)
+	}
+	return v, nil
+}
+
+// splitUnit splits "2.5 cm" into "2.5" and "cm". The number is the longest prefix made of
+// characters a decimal number can contain; ParseFloat then judges it.
+func splitUnit(s string) (num, unit string) {
+	i := 0
+	for i < len(s) {
+		c := s[i]
+		isExp := (c == 'e' || c == 'E') && i > 0 && i+1 < len(s) && (isDigit(s[i+1]) || s[i+1] == '+' || s[i+1] == '-')
+		if isDigit(c) || c == '.' || c == '+' || c == '-' || isExp {
+			i++
+			continue
+		}
+		break
+	}
+	return s[:i], strings.TrimSpace(s[i:])
+}
+
+func isDigit(c byte) bool { return c >= '0' && c <= '9' }
+
+// formatNumber writes a stored value back into a form field: the shortest text that reads back to
+// the same float64, without exponents for everyday sizes.
+func formatNumber(v float64) string {
+	a := math.Abs(v)
+	if a == 0 || (a >= 1e-4 && a < 1e9) {
+		return strconv.FormatFloat(v, 'f', -1, 64)
+	}
+	return strconv.FormatFloat(v, 'g', -1, 64)
+}
