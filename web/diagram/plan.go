@@ -128,13 +128,13 @@ func drawHoleNumbers(p *pen, t *tableScene) {
 		return
 	}
 	front := t.oy + t.depthMM()
-	p.group(`font-size="2.5"`, `fill="#555555"`, `text-anchor="middle"`)
+	p.group(`class="hole-numbers"`, `font-size="2.5"`, `fill="#555555"`, `text-anchor="middle"`)
 	for col := 1; col <= g.cols; col++ {
 		x, _ := t.pt(g.hole(col, 1))
 		p.text(x, front+3.6, strconv.Itoa(col))
 	}
 	p.gend()
-	p.group(`font-size="2.5"`, `fill="#555555"`, `text-anchor="end"`)
+	p.group(`class="hole-numbers"`, `font-size="2.5"`, `fill="#555555"`, `text-anchor="end"`)
 	for row := 1; row <= g.rows; row++ {
 		_, y := t.pt(g.hole(1, row))
 		p.text(t.ox-1.5, y+0.9, strconv.Itoa(row))
