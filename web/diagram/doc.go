@@ -19,6 +19,16 @@
 // few attribute values that carry user text (aria-label) are escaped here with html.EscapeString.
 // Escaping twice would show "&lt;" to the reader, so each string is escaped exactly once.
 //
+// Groups carry class names (rays, paraxial, elements, beam, waists, holes, mounts, beam-path,
+// beam-runs-on, warning-markers, hole-numbers, check-bar, cautions, cautions-text) so that tests
+// and page CSS can find them; the drawings need no stylesheet.
+//
+// Shared scales: the compare page passes the larger of PathLengthMM and of SideMMPerPX of two
+// reports as SideOptions.ZMaxMM and MMPerPX, and the larger TableMMPerPX as TableOptions.MMPerPX.
+//
+// Golden files live in testdata/golden; `go test ./web/diagram -update` rewrites them and a
+// mismatch leaves a .actual file beside the golden one.
+//
 // Colours of wavelengths come from WavelengthColor, our own piecewise-linear approximation of the
 // visible spectrum with dark tones outside it; see its comment.
 package diagram
