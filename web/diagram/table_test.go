@@ -1,0 +1,202 @@
+package diagram
+
+import (
+	"fmt"
+	"math"
+	"strings"
+	"testing"
+
+	"raytable/optics"
+)
+
+func TestTableHoles(t *testing.T) {
+	// Common practice: metric breadboards have holes every 25 mm starting 12.5 mm from the front
+	// and left edges, imperial ones every 1 in (25.4 mm) starting 0.5 in; a hole centre must lie
+	// strictly inside the table. Counts are floor((size - offset) / pitch) + 1 less any hole on the
+	// far edge.
+	cases := []struct {
+		name       string
+		table      optics.Table
+		cols, rows int
+	}{
+		{"metric 600x300", optics.Table{Grid: optics.GridMetric25, WidthMM: 600, DepthMM: 300}, 24, 12},
+		{"metric 900x600", optics.Table{Grid: optics.GridMetric25, WidthMM: 900, DepthMM: 600}, 36, 24},
+		{"imperial 24x12 in", optics.Table{Grid: optics.GridImperial1, WidthMM: 609.6, DepthMM: 304.8}, 24, 12},
+		{"metric offset 25 (far-edge hole dropped)", optics.Table{Grid: optics.GridMetric25, WidthMM: 600, DepthMM: 300, HoleOffsetMM: fp(25)}, 23, 11},
+		{"no grid", optics.Table{Grid: optics.GridNone, WidthMM: 600, DepthMM: 300}, 0, 0},
+	}
+	for _, c := range cases {
+		t.Run(c.name, func(t *testing.T) {
+			b := fixtureBench()
+			b.Table = c.table
+			for _, out := range [][]byte{Table(b, fixtureReport(), TableOptions{}), Plan(b, fixtureReport())} {
+				root := parseSVG(t, out)
+				if got := root.count("holes", "circle"); got != c.cols*c.rows {
+					t.Errorf("hole circles = %d, want %d x %d = %d", got, c.cols, c.rows, c.cols*c.rows)
+				}
+			}
+		})
+	}
+}
+
+func TestTableHolePositions(t *testing.T) {
+	// The front-left hole of a metric table sits 12.5 mm from both edges (common practice); with
+	// the front edge at the bottom its centre is 12.5 mm above the table's bottom edge in the plan.
+	b := fixtureBench()
+	root := parseSVG(t, Plan(b, fixtureReport()))
+	holes := root.byClass("holes")[0].Children
+	var table xnode
+	for _, r := range root.all(func(m xnode) bool { return m.XMLName.Local == "rect" && m.attr("fill") == "#f3f3ee" }) {
+		table = r
+	}
+	left, bottom := table.num(t, "x"), table.num(t, "y")+table.num(t, "height")
+	first := holes[0]   // row 1, column 1: drawn first
+	const tolMM = 0.005 // two decimals in the plan
+	if dx := first.num(t, "cx") - left; math.Abs(dx-12.5) > tolMM {
+		t.Errorf("first hole %g mm from the left edge, want 12.5", dx)
+	}
+	if dy := bottom - first.num(t, "cy"); math.Abs(dy-12.5) > tolMM {
+		t.Errorf("first hole %g mm from the front edge, want 12.5", dy)
+	}
+	if w := table.num(t, "width"); math.Abs(w-600) > tolMM {
+		t.Errorf("table drawn %g mm wide, want 600", w)
+	}
+}
+
+func TestTableMountsAndWarnings(t *testing.T) {
+	b, r := fixtureBench(), fixtureReport()
+	root := parseSVG(t, Table(b, r, TableOptions{}))
+	mounts := root.byClass("mounts")[0].Children
+	if len(mounts) != len(r.Placement) {
+		t.Fatalf("footprints = %d, want one per placement = %d", len(mounts), len(r.Placement))
+	}
+	var red []int
+	for i, m := range mounts {
+		if m.attr("stroke") == "#c62828" {
+			red = append(red, i)
+		}
+	}
+	// The fixture's mounts-overlap warning names SC (element) and D (in its message): placements 4, 5.
+	if fmt.Sprint(red) != "[4 5]" {
+		t.Errorf("red footprints at %v, want [4 5] (SC and D)", red)
+	}
+	// Markers: warnings 1 (SC) and 2 (A1) have elements; 3 has none and is only in the legend.
+	if got := root.count("warning-markers", "circle"); got != 2 {
+		t.Errorf("warning markers = %d, want 2", got)
+	}
+	for _, want := range []string{"1.", "2.", "3.", "rays-clipped: 1 ray is cut by A1 <iris> & more"} {
+		if !hasText(root, want) {
+			t.Errorf("legend lacks %q", want)
+		}
+	}
+	if pts := strings.Fields(mounts[2].attr("points")); len(pts) != 4 {
+		t.Errorf("mirror footprint points %q, want 4 corners", mounts[2].attr("points"))
+	}
+}
+
+func TestMirrorFootprintTurns(t *testing.T) {
+	// A mirror's mount turns with its surface: a +x to +y fold has its normal at 135°, so a square
+	// footprint of side s stands as a diamond, corners on the table axes through the post at
+	// s/sqrt(2) (geometry).
+	const side, tol = 40.0, 1e-9
+	c := footprint(optics.Placement{TableXMM: 200, TableYMM: 100, HeadingDeg: 135, MountWidthMM: side, MountDepthMM: side})
+	d := side / math.Sqrt2
+	want := map[vec]bool{{200 - d, 100}: true, {200 + d, 100}: true, {200, 100 - d}: true, {200, 100 + d}: true}
+	for _, v := range c {
+		found := false
+		for w := range want {
+			if math.Abs(v.x-w.x) < tol && math.Abs(v.y-w.y) < tol {
+				found = true
+			}
+		}
+		if !found {
+			t.Errorf("corner %v is not on an axis through the post at %g mm", v, d)
+		}
+	}
+}
+
+func TestFootprintGeometry(t *testing.T) {
+	// A 40 x 20 mm mount heading 90° (+y): depth 20 along y, width 40 along x (geometry).
+	c := footprint(optics.Placement{TableXMM: 100, TableYMM: 50, HeadingDeg: 90, MountWidthMM: 40, MountDepthMM: 20})
+	minX, maxX, minY, maxY := math.Inf(1), math.Inf(-1), math.Inf(1), math.Inf(-1)
+	for _, v := range c {
+		minX, maxX = math.Min(minX, v.x), math.Max(maxX, v.x)
+		minY, maxY = math.Min(minY, v.y), math.Max(maxY, v.y)
+	}
+	const tol = 1e-9
+	if math.Abs(maxX-minX-40) > tol || math.Abs(maxY-minY-20) > tol || math.Abs((minX+maxX)/2-100) > tol || math.Abs((minY+maxY)/2-50) > tol {
+		t.Errorf("footprint spans x [%g, %g], y [%g, %g]; want x [80, 120], y [40, 60]", minX, maxX, minY, maxY)
+	}
+}
+
+func TestFoldedPathBands(t *testing.T) {
+	// Along the fixture's first stretch (+x at y = 100) the band is ±w around the path; after the
+	// 90° fold at M1 (path 150) it runs along +y at x = 200.
+	b, r := fixtureBench(), fixtureReport()
+	fp := newFoldedPath(b, r)
+	p := fp.at(fp.segment(120), 120)
+	if p != (vec{170, 100}) {
+		t.Errorf("path 120 mm is at %v, want {170 100}", p)
+	}
+	q := fp.at(fp.segment(180), 180)
+	if math.Abs(q.x-200) > 1e-9 || math.Abs(q.y-130) > 1e-9 {
+		t.Errorf("path 180 mm is at %v, want {200 130}", q)
+	}
+	bands := fp.bands(r.Beam.Samples)
+	if len(bands) == 0 {
+		t.Fatal("no bands")
+	}
+	first := bands[0] // source to L1 first face: w = 1 mm from the fixture
+	if first[0] != (vec{50, 101}) {
+		t.Errorf("band starts at %v, want {50 101} (1 mm left of the source)", first[0])
+	}
+}
+
+func TestPlanIsTrueSize(t *testing.T) {
+	b, r := fixtureBench(), fixtureReport()
+	root := parseSVG(t, Plan(b, r))
+	w, h := root.attr("width"), root.attr("height")
+	if !strings.HasSuffix(w, "mm") || !strings.HasSuffix(h, "mm") {
+		t.Fatalf("width %q height %q: want millimetres", w, h)
+	}
+	// SVG 1.1 §7.7: with viewBox "0 0 W H" on a W mm x H mm viewport one user unit is one mm.
+	vb := strings.Fields(root.attr("viewBox"))
+	if len(vb) != 4 || vb[0] != "0" || vb[1] != "0" || vb[2]+"mm" != w || vb[3]+"mm" != h {
+		t.Errorf("viewBox %q does not match width %q height %q", root.attr("viewBox"), w, h)
+	}
+	bars := root.byClass("check-bar")
+	if len(bars) != 1 {
+		t.Fatalf("check bars = %d, want 1", len(bars))
+	}
+	if got := bars[0].num(t, "width"); got != 100 {
+		t.Errorf("check bar is %g user units long, want 100 (= 100 mm)", got)
+	}
+	if !hasText(root, CheckBarLabel) {
+		t.Error("check bar label missing")
+	}
+	var caution []string
+	for _, g := range root.byClass("cautions-text") {
+		for _, c := range g.Children {
+			caution = append(caution, c.Text)
+		}
+	}
+	if strings.Join(caution, " ") != LaserCaution {
+		t.Errorf("cautions box reads %q", strings.Join(caution, " "))
+	}
+	for _, p := range r.Placement {
+		if !hasText(root, p.ID) {
+			t.Errorf("post %s not labelled", p.ID)
+		}
+	}
+	// Hole numbering: columns 1..24 and rows 1..12 of the 600 x 300 metric table (common practice
+	// grid, see TestTableHoles), one number each.
+	var numbers []string
+	for _, g := range root.byClass("hole-numbers") {
+		for _, c := range g.Children {
+			numbers = append(numbers, c.Text)
+		}
+	}
+	if len(numbers) != 24+12 || numbers[0] != "1" || numbers[23] != "24" || numbers[35] != "12" {
+		t.Errorf("hole numbers %q, want 1..24 then 1..12", numbers)
+	}
+}
