@@ -16,6 +16,7 @@ type Report struct {
 	Elements      []ElementPlace `json:"elements"`
 	Rays          []Ray          `json:"rays"`
 	Beam          *BeamReport    `json:"beam,omitempty"`
+	Holes         HoleGrid       `json:"holes"`
 	Placement     []Placement    `json:"placement,omitempty"`
 	Warnings      []Warning      `json:"warnings"`
 }
@@ -204,4 +205,15 @@ type Placement struct {
 	OffsetYMM    float64 `json:"offset_y_mm"`
 	MountWidthMM float64 `json:"mount_width_mm"`
 	MountDepthMM float64 `json:"mount_depth_mm"`
+}
+
+// HoleGrid is the breadboard's hole pattern: the first hole OffsetMM from the front and left
+// edges, then one every PitchMM, Columns x Rows holes whose centres lie inside the table.
+type HoleGrid struct {
+	Kind     string  `json:"kind"`   // GridMetric25, GridImperial1 or GridNone
+	Thread   string  `json:"thread"` // the screw the holes take; "" without a grid
+	PitchMM  float64 `json:"pitch_mm"`
+	OffsetMM float64 `json:"offset_mm"`
+	Columns  int     `json:"columns"`
+	Rows     int     `json:"rows"`
 }

@@ -5,6 +5,7 @@ import (
 	"math"
 
 	"raytable/optics"
+	"raytable/optics/layout"
 )
 
 // The fixtures below are hand-made inputs for the drawings: plausible positions and ray heights
@@ -138,10 +139,18 @@ func fixtureReport() *optics.Report {
 		Rays:          fixtureRays(),
 		Beam:          fixtureBeam(),
 		Placement:     fixturePlacement(),
+		Holes:         holesFor(fixtureBench().Table),
 		Warnings: []optics.Warning{
 			{Code: "mounts-overlap", Element: "SC", Message: "the mounts of SC and D overlap: move one of them or give a smaller mount"},
 			{Code: "rays-clipped", Element: "A1", Message: "1 ray is cut by A1 <iris> & more"},
 			{Code: "no-beam-end", Message: "a warning about no element in particular"},
 		},
 	}
+}
+
+// holesFor is the hole grid the analysis reports for a table; the counting rule itself is tested
+// in optics/layout.
+func holesFor(t optics.Table) optics.HoleGrid {
+	g := layout.Holes(t)
+	return optics.HoleGrid{Kind: g.Kind, Thread: g.Thread, PitchMM: g.PitchMM, OffsetMM: g.OffsetMM, Columns: g.Columns, Rows: g.Rows}
 }

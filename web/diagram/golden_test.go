@@ -55,7 +55,9 @@ func TestGoldenFixture(t *testing.T) {
 		}},
 		{"side-empty.svg", func() []byte { return Side(&optics.Report{}, SideOptions{}) }},
 		{"table-fixture.svg", func() []byte { return Table(b, r, TableOptions{}) }},
-		{"table-empty.svg", func() []byte { return Table(emptyBench, &optics.Report{}, TableOptions{WidthPX: 480}) }},
+		{"table-empty.svg", func() []byte {
+			return Table(emptyBench, &optics.Report{Holes: holesFor(emptyBench.Table)}, TableOptions{WidthPX: 480})
+		}},
 		{"plan-fixture.svg", func() []byte { return Plan(b, r) }},
 	}
 	for _, c := range cases {

@@ -1,8 +1,6 @@
 package diagram
 
 import (
-	"math"
-
 	"raytable/optics"
 )
 
@@ -13,42 +11,29 @@ const (
 	imperialHoleRadiusMM = 3.175
 )
 
-// holeGrid is the breadboard's hole pattern: the first hole offset from the front and left edges,
-// then one every pitch, every centre strictly inside the table (the same rule as the placement list).
+// holeGrid is the breadboard's hole pattern as the report gives it, with the hole size to draw.
 type holeGrid struct {
 	pitch, offset, radius float64
 	cols, rows            int
 }
 
-func holesOf(t optics.Table) holeGrid {
-	var g holeGrid
-	switch t.Grid {
-	case optics.GridMetric25:
-		g = holeGrid{pitch: 25, offset: 12.5, radius: metricHoleRadiusMM}
-	case optics.GridImperial1:
-		g = holeGrid{pitch: 25.4, offset: 12.7, radius: imperialHoleRadiusMM}
-	default:
-		return g
-	}
-	if t.HoleOffsetMM != nil {
-		g.offset = *t.HoleOffsetMM
-	}
-	g.cols = holeCount(t.WidthMM, g.offset, g.pitch)
-	g.rows = holeCount(t.DepthMM, g.offset, g.pitch)
-	return g
-}
+// maxHolesPerSide caps the drawing of a huge table.
+const maxHolesPerSide = 400
 
-// holeCount counts holes at offset, offset+pitch, ... strictly inside (0, size). It is capped so a
-// huge table cannot blow up the drawing.
-func holeCount(size, offset, pitch float64) int {
-	if !finite(size, offset, pitch) || pitch <= 0 || offset <= 0 || offset >= size {
-		return 0
+func holesOf(h optics.HoleGrid) holeGrid {
+	g := holeGrid{pitch: h.PitchMM, offset: h.OffsetMM, cols: min(h.Columns, maxHolesPerSide), rows: min(h.Rows, maxHolesPerSide)}
+	switch h.Kind {
+	case optics.GridMetric25:
+		g.radius = metricHoleRadiusMM
+	case optics.GridImperial1:
+		g.radius = imperialHoleRadiusMM
+	default:
+		return holeGrid{}
 	}
-	n := int(math.Floor((size-offset)/pitch)) + 1
-	if offset+float64(n-1)*pitch >= size {
-		n--
+	if !finite(g.pitch, g.offset) || g.pitch <= 0 {
+		return holeGrid{}
 	}
-	return min(n, 400)
+	return g
 }
 
 func (g holeGrid) hole(col, row int) vec {

@@ -74,7 +74,7 @@ func Plan(b *optics.Bench, r *optics.Report) []byte {
 	p.start(w, h, "mm", label)
 	p.rect(0, 0, w, h, `fill="#ffffff"`)
 	p.text(planMarginMM, planMarginMM+5, label, `font-size="5.5"`, `font-weight="bold"`, `fill="#000000"`)
-	p.text(planMarginMM, planMarginMM+11, tableCaption(b)+"; 1 unit = 1 mm", attr("font-size", p.num(planFontMM)), `fill="#333333"`)
+	p.text(planMarginMM, planMarginMM+11, tableCaption(b, r)+"; 1 unit = 1 mm", attr("font-size", p.num(planFontMM)), `fill="#333333"`)
 	drawCheckBar(p, planMarginMM, planMarginMM+16)
 
 	p.viewport(t.ox, t.oy, t.widthMM(), t.depthMM())

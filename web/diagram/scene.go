@@ -47,8 +47,8 @@ func newTableScene(b *optics.Bench, r *optics.Report) *tableScene {
 	t := &tableScene{b: b, r: r, fp: newFoldedPath(b, r)}
 	if b != nil {
 		t.known = finite(b.Table.WidthMM, b.Table.DepthMM) && b.Table.WidthMM > 0 && b.Table.DepthMM > 0
-		if t.known {
-			t.grid = holesOf(b.Table)
+		if t.known && r != nil {
+			t.grid = holesOf(r.Holes)
 		}
 	}
 	t.region()

@@ -93,7 +93,7 @@ func Table(b *optics.Bench, r *optics.Report, o TableOptions) []byte {
 	p.start(w, h, "", label)
 	p.rect(0, 0, w, h, `fill="#ffffff"`)
 	p.text(tableMarginPX, 20, label, `font-size="14"`, `font-weight="bold"`, `fill="#222222"`)
-	p.text(w-tableMarginPX, 20, tableCaption(b), `font-size="11"`, `text-anchor="end"`, `fill="#555555"`)
+	p.text(w-tableMarginPX, 20, tableCaption(b, r), `font-size="11"`, `text-anchor="end"`, `fill="#555555"`)
 	p.viewport(tableMarginPX, tableTopPX, plotW, plotH)
 	t.draw(p)
 	p.endViewport()
@@ -112,11 +112,14 @@ func Table(b *optics.Bench, r *optics.Report, o TableOptions) []byte {
 }
 
 // tableCaption states the table size, grid and orientation.
-func tableCaption(b *optics.Bench) string {
+func tableCaption(b *optics.Bench, r *optics.Report) string {
 	if b == nil || !(b.Table.WidthMM > 0 && b.Table.DepthMM > 0) {
 		return "table size unknown; front at the bottom"
 	}
-	g := holesOf(b.Table)
+	var g holeGrid
+	if r != nil {
+		g = holesOf(r.Holes)
+	}
 	s := fmtNum(b.Table.WidthMM) + " × " + fmtNum(b.Table.DepthMM) + " mm"
 	if g.cols > 0 {
 		s += ", " + itoa(g.cols) + " × " + itoa(g.rows) + " holes every " + fmtNum(g.pitch) + " mm"

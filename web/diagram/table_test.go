@@ -29,7 +29,9 @@ func TestTableHoles(t *testing.T) {
 		t.Run(c.name, func(t *testing.T) {
 			b := fixtureBench()
 			b.Table = c.table
-			for _, out := range [][]byte{Table(b, fixtureReport(), TableOptions{}), Plan(b, fixtureReport())} {
+			r := fixtureReport()
+			r.Holes = holesFor(c.table)
+			for _, out := range [][]byte{Table(b, r, TableOptions{}), Plan(b, r)} {
 				root := parseSVG(t, out)
 				if got := root.count("holes", "circle"); got != c.cols*c.rows {
 					t.Errorf("hole circles = %d, want %d x %d = %d", got, c.cols, c.rows, c.cols*c.rows)
