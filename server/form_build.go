@@ -62,7 +62,9 @@ func benchValues(b *optics.Bench) map[string]string {
 		v[p+"thicknesses_mm"] = numList(e.ThicknessesMM)
 		v[p+"materials"] = strings.Join(e.Materials, ", ")
 		v[p+"focal_mm"] = optText(e.FocalMM)
-		v[p+"radius_mm"] = optTextOr(e.RadiusMM, "flat")
+		if e.Type == optics.TypeMirror {
+			v[p+"radius_mm"] = optTextOr(e.RadiusMM, "flat")
+		}
 		v[p+"turn_deg"] = optText(e.TurnDeg)
 		v[p+"diameter_mm"] = optText(e.DiameterMM)
 		v[p+"width_mm"] = optText(e.WidthMM)
