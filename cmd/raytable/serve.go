@@ -45,18 +45,18 @@ func runServe(ctx context.Context, e env) int {
 	}
 	log := slog.New(slog.NewTextHandler(e.stderr, nil))
 
-	st, err := store.OpenBolt(*storePath)
-	if err != nil {
-		fmt.Fprintf(e.stderr, "raytable: %v\n", err)
-		return exitInternal
-	}
-	defer st.Close()
-
 	ln, err := net.Listen("tcp", *addr)
 	if err != nil {
 		fmt.Fprintf(e.stderr, "raytable: cannot listen on %s: %v\n", *addr, err)
 		return exitInternal
 	}
+	st, err := store.OpenBolt(*storePath)
+	if err != nil {
+		ln.Close()
+		fmt.Fprintf(e.stderr, "raytable: %v\n", err)
+		return exitInternal
+	}
+	defer st.Close()
 	srv := server.HTTPServer(server.New(server.Config{Store: st, Logger: log}), log)
 	fmt.Fprintf(e.stdout, "raytable is serving at http://%s/ (designs in %s); press Ctrl+C to stop\n", ln.Addr(), *storePath)
 
