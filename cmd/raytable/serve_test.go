@@ -77,7 +77,10 @@ func TestServeStartsAndStops(t *testing.T) {
 	defer cancel()
 	done := make(chan int, 1)
 	vars := map[string]string{"RAYTABLE_ADDR": "127.0.0.1:0", "RAYTABLE_STORE": storePath}
-	go func() { done <- run(ctx, nil, func(k string) string { return vars[k] }, strings.NewReader(""), pw, &errOut); pw.Close() }()
+	go func() {
+		done <- run(ctx, nil, func(k string) string { return vars[k] }, strings.NewReader(""), pw, &errOut)
+		pw.Close()
+	}()
 
 	line, err := bufio.NewReader(pr).ReadString('\n')
 	if err != nil {
