@@ -50,7 +50,8 @@
     generation++;
     previewQueued = false;
     setBusy(true);
-    fetch(form.action, { method: 'POST', body: formBody(form, submitter), credentials: 'same-origin' })
+    // getAttribute, not form.action: the buttons named "action" shadow that property.
+    fetch(form.getAttribute('action'), { method: 'POST', body: formBody(form, submitter), credentials: 'same-origin' })
       .then(function (resp) {
         return resp.text().then(function (html) {
           if (!swapPage(html)) {
