@@ -80,7 +80,8 @@ type ElementPlace struct {
 	TableYMM       float64     `json:"table_y_mm"`
 	HeadingInDeg   float64     `json:"heading_in_deg"`
 	HeadingOutDeg  float64     `json:"heading_out_deg"`
-	SemiDiameterMM *float64    `json:"semi_diameter_mm"` // null when unlimited
+	SemiDiameterMM *float64    `json:"semi_diameter_mm"`   // null when unlimited
+	FocalMM        *float64    `json:"focal_mm,omitempty"` // thin lenses
 	Faces          []FacePlace `json:"faces"`
 	MarginalYMM    float64     `json:"marginal_y_mm"`  // paraxial marginal ray height at the first face (tangential)
 	ChiefYMM       float64     `json:"chief_y_mm"`     // paraxial chief ray height at the first face (tangential)

@@ -15,6 +15,9 @@ func fillElements(places []optics.ElementPlace, b *optics.Bench, p *optics.Path,
 		e := &b.Elements[i]
 		pl := &places[i]
 		pl.SemiDiameterMM = finite(e.SemiDiameterMM())
+		if e.Type == optics.TypeThinLens && e.FocalMM != nil {
+			pl.FocalMM = ptr(*e.FocalMM)
+		}
 		pl.Faces = make([]optics.FacePlace, 0, span.Last-span.First+1)
 		for j := span.First; j <= span.Last; j++ {
 			s := &p.Surfaces[j]

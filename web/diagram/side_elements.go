@@ -50,7 +50,7 @@ func drawSideElement(p *pen, f *sideFrame, e *optics.ElementPlace, h float64) {
 	case optics.TypeLens:
 		drawLens(p, f, e, h)
 	case optics.TypeThinLens:
-		drawThinLens(p, f, z, visibleHalf(f, h))
+		drawThinLens(p, f, z, visibleHalf(f, h), e.FocalMM != nil && *e.FocalMM < 0)
 	case optics.TypeMirror:
 		var radius *float64
 		if len(e.Faces) > 0 {
@@ -111,13 +111,18 @@ func drawLens(p *pen, f *sideFrame, e *optics.ElementPlace, h float64) {
 	}
 }
 
-// drawThinLens draws an ideal lens as a line with an arrowhead at each end.
-func drawThinLens(p *pen, f *sideFrame, z, h float64) {
+// drawThinLens draws an ideal lens as a line with an arrowhead at each end: pointing outwards for
+// a converging lens, inwards for a diverging one.
+func drawThinLens(p *pen, f *sideFrame, z, h float64, diverging bool) {
 	x, top, bottom := f.x(z), f.y(h), f.y(-h)
+	tip := 6.0
+	if diverging {
+		tip = -6
+	}
 	p.group(`fill="none"`, `stroke="#2d5fa8"`, `stroke-width="1.5"`)
 	p.line(x, top, x, bottom)
-	p.polyline([]float64{x - 4, x, x + 4}, []float64{top + 6, top, top + 6})
-	p.polyline([]float64{x - 4, x, x + 4}, []float64{bottom - 6, bottom, bottom - 6})
+	p.polyline([]float64{x - 4, x, x + 4}, []float64{top + tip, top, top + tip})
+	p.polyline([]float64{x - 4, x, x + 4}, []float64{bottom - tip, bottom, bottom - tip})
 	p.gend()
 }
 
