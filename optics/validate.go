@@ -12,6 +12,7 @@ const (
 	MinWavelengthNM = 200.0   // shortest accepted wavelength
 	MaxWavelengthNM = 20000.0 // longest accepted wavelength
 	MaxLengthMM     = 1e6     // largest accepted magnitude of any length; more is a slip, not a bench
+	MinLengthMM     = 1e-6    // smallest non-zero magnitude of any length (1 nm); less is a slip and overflows 1/x
 	MaxFanRays      = 201     // most rays in one meridional fan
 	MaxIDLength     = 40      // longest element id
 	MaxIndex        = 5.0     // largest accepted refractive index (index or nd)
@@ -64,6 +65,10 @@ func (v *checker) length(path string, x float64) bool {
 	}
 	if math.Abs(x) > MaxLengthMM {
 		v.add(path, "%s mm is out of range: lengths are limited to %s mm in magnitude", fmtNum(x), fmtNum(MaxLengthMM))
+		return false
+	}
+	if x != 0 && math.Abs(x) < MinLengthMM {
+		v.add(path, "%s mm is too small: a length other than 0 must be at least %s mm (1 nm) in magnitude", fmtNum(x), fmtNum(MinLengthMM))
 		return false
 	}
 	return true

@@ -44,6 +44,32 @@ func TestValidateNonFinite(t *testing.T) {
 	}
 }
 
+// TestValidateTinyLengths: a length like 1e-300 mm passes "> 0" but overflows every 1/x that
+// follows (power, curvature, Rayleigh range); it is rejected like a huge one.
+func TestValidateTinyLengths(t *testing.T) {
+	b := fixture(t)
+	b.Elements[5].FocalMM = ptr(1e-300)
+	b.Source.Beam.WaistRadiusMM = 1e-320
+	b.Elements[2].ThicknessesMM[0] = 5e-7
+	err := Validate(b)
+	want := []string{"source.beam.waist_radius_mm", "elements[2].thicknesses_mm[0]", "elements[5].focal_mm"}
+	if got := paths(err); !reflect.DeepEqual(got, want) {
+		t.Errorf("problem paths\n got %q\nwant %q\n%v", got, want, err)
+	}
+	for _, p := range ErrorProblems(err) {
+		if !strings.Contains(p.Message, "too small") {
+			t.Errorf("%s: message %q does not say the length is too small", p.Path, p.Message)
+		}
+	}
+	b = fixture(t)
+	b.Elements[2].ThicknessesMM[0] = MinLengthMM // exactly the floor is accepted by this rule
+	for _, p := range ErrorProblems(Validate(b)) {
+		if strings.Contains(p.Message, "too small") {
+			t.Errorf("%s: %s", p.Path, p.Message)
+		}
+	}
+}
+
 func TestValidateTooManyElements(t *testing.T) {
 	b := fixture(t)
 	b.Elements = nil

@@ -94,11 +94,16 @@ func clearDiameterFor(faces []footprint, want float64) float64 {
 	for _, f := range faces {
 		hi = math.Max(hi, math.Max(f.wtMM, f.wsMM))
 	}
-	if hi == 0 {
-		return 0
+	if hi == 0 || math.IsNaN(hi) || math.IsInf(hi, 0) {
+		return math.NaN() // no usable beam size: no advice rather than a loop that never ends
 	}
 	lo := 0.0
-	for passedWith(faces, hi) < want {
+	// Each doubling at least doubles the aperture against a finite beam; 64 of them cover every
+	// float64 scale, so the loop ends even if passedWith misbehaves.
+	for range 64 {
+		if passedWith(faces, hi) >= want {
+			break
+		}
 		lo, hi = hi, 2*hi
 	}
 	for range 200 {

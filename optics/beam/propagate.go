@@ -128,11 +128,14 @@ func elementRow(p *optics.Path, g gaussian, t, s *planeTrace, sp optics.Span) (o
 }
 
 func clipWarning(row optics.BeamAt, faces []footprint) optics.Warning {
-	want := clearDiameterFor(faces, PassFraction)
+	advice := ""
+	if want := clearDiameterFor(faces, PassFraction); !math.IsNaN(want) {
+		advice = fmt.Sprintf(" a clear diameter of %.3g mm or more passes 99 %%.", want)
+	}
 	return optics.Warning{
 		Code:    CodeClipped,
 		Element: row.ID,
-		Message: fmt.Sprintf("%s passes %.1f %% of the arriving beam through its %.3g mm clear diameter; a clear diameter of %.3g mm or more passes 99 %%. Downstream the beam is computed as if it were not clipped.",
-			row.ID, 100*row.Transmitted, 2*faces[0].aMM, want),
+		Message: fmt.Sprintf("%s passes %.1f %% of the arriving beam through its %.3g mm clear diameter;%s Downstream the beam is computed as if it were not clipped.",
+			row.ID, 100*row.Transmitted, 2*faces[0].aMM, advice),
 	}
 }
