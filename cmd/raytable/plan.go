@@ -21,9 +21,9 @@ func runPlan(_ context.Context, e env) int {
 		fmt.Fprintln(e.stderr, "usage: raytable plan FILE|- [--csv]")
 		fs.PrintDefaults()
 	}
-	path, ok := oneFileArg(fs, e.args)
+	path, code, ok := oneFileArg(fs, e.args)
 	if !ok {
-		return exitInvalid
+		return code
 	}
 	_, r, code := readBench(e, path)
 	if code != exitOK {

@@ -3,6 +3,7 @@ package main
 import (
 	"context"
 	"encoding/json"
+	"errors"
 	"flag"
 	"fmt"
 )
@@ -17,9 +18,9 @@ func runReport(_ context.Context, e env) int {
 		fmt.Fprintln(e.stderr, "usage: raytable report FILE|- [--json]")
 		fs.PrintDefaults()
 	}
-	path, ok := oneFileArg(fs, e.args)
+	path, code, ok := oneFileArg(fs, e.args)
 	if !ok {
-		return exitInvalid
+		return code
 	}
 	_, r, code := readBench(e, path)
 	if code != exitOK {
@@ -41,12 +42,16 @@ func runReport(_ context.Context, e env) int {
 	return exitOK
 }
 
-// oneFileArg parses flags placed before or after a single FILE argument.
-func oneFileArg(fs *flag.FlagSet, args []string) (string, bool) {
+// oneFileArg parses flags placed before or after a single FILE argument. On failure it returns
+// the exit status: 0 after -h (the usage was asked for), 2 for bad usage.
+func oneFileArg(fs *flag.FlagSet, args []string) (string, int, bool) {
 	var files []string
 	for {
 		if err := fs.Parse(args); err != nil {
-			return "", false
+			if errors.Is(err, flag.ErrHelp) {
+				return "", exitOK, false
+			}
+			return "", exitInvalid, false
 		}
 		args = fs.Args()
 		if len(args) == 0 {
@@ -57,7 +62,7 @@ func oneFileArg(fs *flag.FlagSet, args []string) (string, bool) {
 	}
 	if len(files) != 1 {
 		fs.Usage()
-		return "", false
+		return "", exitInvalid, false
 	}
-	return files[0], true
+	return files[0], exitOK, true
 }

@@ -107,6 +107,9 @@ func TestReportInvalid(t *testing.T) {
 			"elements":[{"id":"L1","type":"lens","gap_mm":-5,"faces_mm":[50,null],"thicknesses_mm":[2],"materials":["unobtainium"]}]}`,
 			[]string{"report", "-"}, exitInvalid, []string{"elements[0].gap_mm", "elements[0].materials[0]"}},
 		{"unknown command", "", []string{"frobnicate"}, exitInvalid, []string{"unknown command"}},
+		{"help asked for", "", []string{"report", "-h"}, exitOK, []string{"usage: raytable report"}},
+		{"unknown flag", "", []string{"plan", "--pdf", demoBench}, exitInvalid, []string{"-pdf", "usage: raytable plan"}},
+		{"two files", "", []string{"plan", demoBench, demoBench}, exitInvalid, []string{"usage: raytable plan"}},
 	}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {
