@@ -228,3 +228,31 @@ func TestCollidingMounts(t *testing.T) {
 		t.Errorf("no mounts-overlap warning for RL1/RL2; warnings: %+v", r.Warnings)
 	}
 }
+
+// TestRelayMagnification: the relay bench images the fibre tip with lateral magnification
+// m = -f / (s - f), s the object distance from the front principal plane (Gaussian lens
+// equation, Hecht, Optics, eq. 5.17 and 5.24, from memory), and the slit sits at that image.
+func TestRelayMagnification(t *testing.T) {
+	data, err := os.ReadFile("../../testdata/relay-bench.json")
+	if err != nil {
+		t.Fatal(err)
+	}
+	r := mustRun(t, string(data))
+	f := value(t, "efl_mm", r.System.EFLMM)
+	s := r.System.FirstVertexPathMM + value(t, "front_principal_mm", r.System.FrontPrincipalMM)
+	want := -f / (s - f)
+	if got := value(t, "magnification", r.System.Magnification); relErr(got, want) > close {
+		t.Errorf("magnification = %.8g, want %.8g", got, want)
+	}
+	// Image distance from the rear principal plane s' = f·s/(s - f), same source.
+	sImage := f * s / (s - f)
+	got := value(t, "image_distance_mm", r.System.ImageDistanceMM) - value(t, "rear_principal_mm", r.System.RearPrincipalMM)
+	if relErr(got, sImage) > close {
+		t.Errorf("image distance from H' = %.8g, want %.8g", got, sImage)
+	}
+	slit := r.Elements[2]
+	imageAt := r.System.LastVertexPathMM + value(t, "image_distance_mm", r.System.ImageDistanceMM)
+	if slit.ID != "SLIT" || math.Abs(slit.PathMM-imageAt) > 0.1 {
+		t.Errorf("slit at %g mm, image at %g mm", slit.PathMM, imageAt)
+	}
+}
