@@ -153,6 +153,9 @@ type Warning struct {
 	Code    string `json:"code"`
 	Element string `json:"element"`
 	Message string `json:"message"`
+	// Others names further elements the warning is about, e.g. the second of two overlapping
+	// mounts, so that drawings can mark them without reading the message.
+	Others []string `json:"others,omitempty"`
 }
 
 // BeamReport is the Gaussian beam along the bench.

@@ -141,7 +141,7 @@ func overlaps(fps []Footprint) []optics.Warning {
 			if !boxes[i].overlaps(boxes[j]) || !convexOverlap(fps[i].Corners[:], fps[j].Corners[:]) {
 				continue
 			}
-			warns = append(warns, optics.Warning{Code: CodeMountsOverlap, Element: fps[i].ID, Message: fmt.Sprintf(
+			warns = append(warns, optics.Warning{Code: CodeMountsOverlap, Element: fps[i].ID, Others: []string{fps[j].ID}, Message: fmt.Sprintf(
 				"the mounts of %s and %s overlap: move one of them or give a smaller mount", fps[i].ID, fps[j].ID)})
 		}
 	}

@@ -141,7 +141,7 @@ func fixtureReport() *optics.Report {
 		Placement:     fixturePlacement(),
 		Holes:         holesFor(fixtureBench().Table),
 		Warnings: []optics.Warning{
-			{Code: "mounts-overlap", Element: "SC", Message: "the mounts of SC and D overlap: move one of them or give a smaller mount"},
+			{Code: "mounts-overlap", Element: "SC", Others: []string{"D"}, Message: "the mounts of SC and D overlap: move one of them or give a smaller mount"},
 			{Code: "rays-clipped", Element: "A1", Message: "1 ray is cut by A1 <iris> & more"},
 			{Code: "no-beam-end", Message: "a warning about no element in particular"},
 		},

@@ -2,8 +2,6 @@ package diagram
 
 import (
 	"math"
-	"strings"
-	"unicode"
 
 	"raytable/optics"
 )
@@ -129,47 +127,20 @@ func footprint(p optics.Placement) []vec {
 func flaggedMounts(r *optics.Report) map[string]bool {
 	flagged := map[string]bool{}
 	for _, w := range r.Warnings {
-		if w.Code != codeMountsOverlap && w.Code != codeMountInBeam {
-			continue
-		}
-		if w.Element != "" {
+		switch w.Code {
+		case codeMountsOverlap:
+			// Both mounts of the pair collide.
+			flagged[w.Element] = true
+			for _, id := range w.Others {
+				flagged[id] = true
+			}
+		case codeMountInBeam:
+			// Only the mount standing in the beam; the elements the beam runs between are fine.
 			flagged[w.Element] = true
 		}
-		for _, e := range r.Elements {
-			if e.ID != "" && containsWord(w.Message, e.ID) {
-				flagged[e.ID] = true
-			}
-		}
 	}
+	delete(flagged, "")
 	return flagged
-}
-
-// containsWord reports whether word occurs in s not touching other letters, digits, '-' or '_'.
-func containsWord(s, word string) bool {
-	isWord := func(r rune) bool { return unicode.IsLetter(r) || unicode.IsDigit(r) || r == '-' || r == '_' }
-	for i := 0; ; {
-		k := strings.Index(s[i:], word)
-		if k < 0 {
-			return false
-		}
-		a, b := i+k, i+k+len(word)
-		before, after := ' ', ' '
-		if a > 0 {
-			before = lastRune(s[:a])
-		}
-		if b < len(s) {
-			after = []rune(s[b:])[0]
-		}
-		if !isWord(before) && !isWord(after) {
-			return true
-		}
-		i = a + 1
-	}
-}
-
-func lastRune(s string) rune {
-	r := []rune(s)
-	return r[len(r)-1]
 }
 
 // position finds an element's table position by id: the element's first vertex, else its post.

@@ -78,7 +78,7 @@ func TestTableMountsAndWarnings(t *testing.T) {
 			red = append(red, i)
 		}
 	}
-	// The fixture's mounts-overlap warning names SC (element) and D (in its message): placements 4, 5.
+	// The fixture's mounts-overlap warning names SC and D (placements 4, 5).
 	if fmt.Sprint(red) != "[4 5]" {
 		t.Errorf("red footprints at %v, want [4 5] (SC and D)", red)
 	}
@@ -200,5 +200,22 @@ func TestPlanIsTrueSize(t *testing.T) {
 	}
 	if len(numbers) != 24+12 || numbers[0] != "1" || numbers[23] != "24" || numbers[35] != "12" {
 		t.Errorf("hole numbers %q, want 1..24 then 1..12", numbers)
+	}
+}
+
+// TestMountInBeamFlagsOnlyTheMount: a mount in the beam is outlined; the elements the beam runs
+// between, named in the message, are not.
+func TestMountInBeamFlagsOnlyTheMount(t *testing.T) {
+	b, r := fixtureBench(), fixtureReport()
+	r.Warnings = []optics.Warning{{Code: "mount-in-beam", Element: "T1", Message: "the beam from SC to D passes through the mount of T1"}}
+	root := parseSVG(t, Table(b, r, TableOptions{}))
+	var red []int
+	for i, m := range root.byClass("mounts")[0].Children {
+		if m.attr("stroke") == "#c62828" {
+			red = append(red, i)
+		}
+	}
+	if fmt.Sprint(red) != "[3]" {
+		t.Errorf("red footprints at %v, want [3] (T1 only)", red)
 	}
 }
