@@ -220,12 +220,12 @@ func TestCollidingMounts(t *testing.T) {
 	r := mustRun(t, string(data))
 	var found bool
 	for _, w := range r.Warnings {
-		if w.Code == "mounts-overlap" && w.Element == "RL1" {
+		if w.Code == "mounts-overlap" && w.Element == "RL1" && len(w.Others) == 1 && w.Others[0] == "RL2" {
 			found = true
 		}
 	}
 	if !found {
-		t.Errorf("no mounts-overlap warning for RL1/RL2; warnings: %+v", r.Warnings)
+		t.Errorf("no mounts-overlap warning naming RL1 and RL2; warnings: %+v", r.Warnings)
 	}
 }
 
