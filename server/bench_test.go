@@ -6,6 +6,8 @@ import (
 	"strconv"
 	"strings"
 	"testing"
+
+	"raytable/server/store"
 )
 
 // BenchmarkEditRoundTrip measures one edit as the server handles it without a browser: parse the
@@ -54,4 +56,28 @@ func BenchmarkPreview(b *testing.B) {
 			b.Fatalf("preview: %d", rec.Code)
 		}
 	}
+}
+
+// BenchmarkBenchPageCached measures GET /r/{id} of a revision whose results are cached: load the
+// revision, build the form and render the page around the kept diagrams and numbers.
+func BenchmarkBenchPageCached(b *testing.B) { benchPage(b, 0) }
+
+// BenchmarkBenchPageUncached is the same GET with the cache off, so every request recomputes the
+// report, both drawings and the numbers; it is the baseline for the cached one.
+func BenchmarkBenchPageUncached(b *testing.B) { benchPage(b, -1) }
+
+func benchPage(b *testing.B, cacheEntries int) {
+	mem := store.NewMem()
+	ts := &testServer{Server: New(Config{Store: mem, CacheEntries: cacheEntries}), mem: mem}
+	id := ts.startDemo(b)
+	var pageBytes int
+	b.ReportAllocs()
+	for b.Loop() {
+		rec := ts.get(b, "/r/"+id)
+		if rec.Code != http.StatusOK {
+			b.Fatalf("page: %d", rec.Code)
+		}
+		pageBytes = rec.Body.Len()
+	}
+	b.ReportMetric(float64(pageBytes), "page-bytes")
 }

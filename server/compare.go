@@ -59,12 +59,12 @@ func (s *Server) compare(w http.ResponseWriter, r *http.Request) {
 		s.render(w, r, status, view.Compare(p))
 		return
 	}
-	ra, err := analyze(ds[0].bench)
+	ra, err := s.report(ds[0])
 	if err != nil {
 		s.fail(w, r, err)
 		return
 	}
-	rb, err := analyze(ds[1].bench)
+	rb, err := s.report(ds[1])
 	if err != nil {
 		s.fail(w, r, err)
 		return

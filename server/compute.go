@@ -2,13 +2,13 @@ package server
 
 import (
 	"bytes"
+	"encoding/json"
 	"net/http"
 	"strings"
 
 	"github.com/go-chi/chi/v5"
 
 	"raytable/optics"
-	"raytable/optics/analysis"
 	"raytable/server/store"
 	"raytable/web/diagram"
 	"raytable/web/view"
@@ -52,10 +52,64 @@ func (s *Server) loadID(id string) (design, error) {
 	return design{rev: rev, bench: b}, nil
 }
 
-// analyze computes a bench's report. A valid bench always gives one; an EInvalid here means the
-// bench came from a form and broke a rule.
-func analyze(b *optics.Bench) (*optics.Report, error) {
-	return analysis.Run(b)
+// report is the report of a stored revision, computed once and then kept in the cache. A valid
+// bench always gives one; an unsaved bench (a preview) is computed with s.analyze directly.
+func (s *Server) report(d design) (*optics.Report, error) {
+	return memo(s.cache, d.rev.ID, artifact{kind: artReport}, func() (*optics.Report, error) {
+		return s.analyze(d.bench)
+	})
+}
+
+// reportJSONBytes is a stored revision's report as `raytable report --json` prints it.
+func (s *Server) reportJSONBytes(d design) ([]byte, error) {
+	rep, err := s.report(d)
+	if err != nil {
+		return nil, err
+	}
+	return memo(s.cache, d.rev.ID, artifact{kind: artReportJSON}, func() ([]byte, error) {
+		var buf bytes.Buffer
+		enc := json.NewEncoder(&buf)
+		enc.SetIndent("", "  ")
+		if err := enc.Encode(rep); err != nil {
+			return nil, err
+		}
+		return buf.Bytes(), nil
+	})
+}
+
+// revResult is a stored revision's diagrams and numbers at the sizes o gives.
+func (s *Server) revResult(d design, o resultOptions) (view.Result, error) {
+	rep, err := s.report(d)
+	if err != nil {
+		return view.Result{}, err
+	}
+	return memo(s.cache, d.rev.ID, artifact{kind: artResult, opts: o}, func() (view.Result, error) {
+		return result(d.bench, rep, o), nil
+	})
+}
+
+// revSVG is one standalone drawing of a stored revision: artSideSVG (at the page size, with or
+// without the paraxial overlay), artTableSVG or artPlanSVG.
+func (s *Server) revSVG(d design, kind string, paraxial bool) ([]byte, error) {
+	rep, err := s.report(d)
+	if err != nil {
+		return nil, err
+	}
+	a := artifact{kind: kind}
+	if kind == artSideSVG {
+		a.opts = resultOptions{sideWidth: pageSideWidthPX, sideHeight: pageSideHeightPX, paraxial: paraxial}
+	}
+	return memo(s.cache, d.rev.ID, a, func() ([]byte, error) {
+		switch kind {
+		case artSideSVG:
+			return diagram.Side(rep, sideOptions(rep, a.opts.sideWidth, a.opts.sideHeight, paraxial)), nil
+		case artTableSVG:
+			return diagram.Table(d.bench, rep, diagram.TableOptions{WidthPX: pageTableWidthPX}), nil
+		case artPlanSVG:
+			return diagram.Plan(d.bench, rep), nil
+		}
+		return nil, optics.Errorf(optics.EInternal, "no drawing named %q", kind)
+	})
 }
 
 // inlineSVG drops the XML prolog and leading comments of a standalone SVG so that it can sit

@@ -156,8 +156,8 @@ func (s *Server) edit(w http.ResponseWriter, r *http.Request) {
 // and numbers are those of the stored revision, the last valid state.
 func (s *Server) invalidEdit(w http.ResponseWriter, r *http.Request, d design, b *optics.Bench, values map[string]string, problems []optics.Problem) {
 	var res view.Result
-	if rep, err := analyze(d.bench); err == nil {
-		res = result(d.bench, rep, pageResult)
+	if stored, err := s.revResult(d, pageResult); err == nil {
+		res = stored
 	} else {
 		res.Problem = "The stored design could not be computed."
 		s.log.Error("stored design does not compute", "id", d.rev.ID, "err", err)
@@ -193,7 +193,7 @@ func (s *Server) preview(w http.ResponseWriter, r *http.Request) {
 		}
 		res.Problem = "Cannot compute this: " + strings.Join(lines, "; ")
 	} else {
-		rep, err := analyze(b)
+		rep, err := s.analyze(b) // not a revision: never cached
 		if err != nil {
 			s.fail(w, r, err)
 			return

@@ -1,11 +1,7 @@
 package server
 
 import (
-	"bytes"
-	"encoding/json"
 	"net/http"
-
-	"raytable/web/diagram"
 )
 
 func (s *Server) benchJSON(w http.ResponseWriter, r *http.Request) {
@@ -25,20 +21,13 @@ func (s *Server) reportJSON(w http.ResponseWriter, r *http.Request) {
 		s.fail(w, r, err)
 		return
 	}
-	rep, err := analyze(d.bench)
+	data, err := s.reportJSONBytes(d)
 	if err != nil {
 		s.fail(w, r, err)
 		return
 	}
-	var buf bytes.Buffer
-	enc := json.NewEncoder(&buf)
-	enc.SetIndent("", "  ")
-	if err := enc.Encode(rep); err != nil {
-		s.fail(w, r, err)
-		return
-	}
 	w.Header().Set("Content-Type", "application/json")
-	w.Write(buf.Bytes())
+	w.Write(data)
 }
 
 func writeSVG(w http.ResponseWriter, svg []byte) {
@@ -46,45 +35,23 @@ func writeSVG(w http.ResponseWriter, svg []byte) {
 	w.Write(svg)
 }
 
-func (s *Server) sideSVG(w http.ResponseWriter, r *http.Request) {
+// drawing answers one standalone SVG of the revision in the URL.
+func (s *Server) drawing(w http.ResponseWriter, r *http.Request, kind string) {
 	d, err := s.load(r)
 	if err != nil {
 		s.fail(w, r, err)
 		return
 	}
-	rep, err := analyze(d.bench)
+	svg, err := s.revSVG(d, kind, r.URL.Query().Get("paraxial") == "1")
 	if err != nil {
 		s.fail(w, r, err)
 		return
 	}
-	writeSVG(w, diagram.Side(rep, sideOptions(rep, pageSideWidthPX, pageSideHeightPX, r.URL.Query().Get("paraxial") == "1")))
+	writeSVG(w, svg)
 }
 
-func (s *Server) tableSVG(w http.ResponseWriter, r *http.Request) {
-	d, err := s.load(r)
-	if err != nil {
-		s.fail(w, r, err)
-		return
-	}
-	rep, err := analyze(d.bench)
-	if err != nil {
-		s.fail(w, r, err)
-		return
-	}
-	writeSVG(w, diagram.Table(d.bench, rep, diagram.TableOptions{WidthPX: pageTableWidthPX}))
-}
+func (s *Server) sideSVG(w http.ResponseWriter, r *http.Request)  { s.drawing(w, r, artSideSVG) }
+func (s *Server) tableSVG(w http.ResponseWriter, r *http.Request) { s.drawing(w, r, artTableSVG) }
 
 // planSVG is the printable plan: its size is in millimetres, so printing at 100 % gives true size.
-func (s *Server) planSVG(w http.ResponseWriter, r *http.Request) {
-	d, err := s.load(r)
-	if err != nil {
-		s.fail(w, r, err)
-		return
-	}
-	rep, err := analyze(d.bench)
-	if err != nil {
-		s.fail(w, r, err)
-		return
-	}
-	writeSVG(w, diagram.Plan(d.bench, rep))
-}
+func (s *Server) planSVG(w http.ResponseWriter, r *http.Request) { s.drawing(w, r, artPlanSVG) }

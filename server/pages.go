@@ -36,14 +36,14 @@ func (s *Server) benchPage(w http.ResponseWriter, r *http.Request) {
 		return
 	}
 	paraxial := r.URL.Query().Get("paraxial") == "1"
-	rep, err := analyze(d.bench)
+	o := pageResult
+	o.paraxial = paraxial
+	res, err := s.revResult(d, o)
 	if err != nil {
 		s.fail(w, r, err)
 		return
 	}
-	o := pageResult
-	o.paraxial = paraxial
-	p := s.benchPageModel(d, paraxial, buildForm(d.rev.ID, d.bench, benchValues(d.bench), nil), result(d.bench, rep, o))
+	p := s.benchPageModel(d, paraxial, buildForm(d.rev.ID, d.bench, benchValues(d.bench), nil), res)
 	s.render(w, r, http.StatusOK, view.Bench(p))
 }
 
@@ -58,16 +58,16 @@ func (s *Server) presentPage(w http.ResponseWriter, r *http.Request) {
 		s.fail(w, r, err)
 		return
 	}
-	rep, err := analyze(d.bench)
+	o := presentResult
+	o.paraxial = r.URL.Query().Get("paraxial") == "1"
+	res, err := s.revResult(d, o)
 	if err != nil {
 		s.fail(w, r, err)
 		return
 	}
-	o := presentResult
-	o.paraxial = r.URL.Query().Get("paraxial") == "1"
 	s.render(w, r, http.StatusOK, view.Present(view.PresentPage{
 		ID: d.rev.ID, Title: title(d.bench), Notes: d.bench.Notes, Created: when(d),
-		Links: links(d, o.paraxial), Result: result(d.bench, rep, o),
+		Links: links(d, o.paraxial), Result: res,
 	}))
 }
 

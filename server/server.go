@@ -10,6 +10,8 @@ import (
 	"github.com/a-h/templ"
 	"github.com/go-chi/chi/v5"
 
+	"raytable/optics"
+	"raytable/optics/analysis"
 	"raytable/server/store"
 	"raytable/web/static"
 	"raytable/web/view"
@@ -31,6 +33,12 @@ type Config struct {
 	Logger *slog.Logger     // default: discard
 	Now    func() time.Time // default: time.Now
 	Random io.Reader        // source of revision ids; default crypto/rand
+
+	// CacheEntries is how many stored revisions keep their computed report, drawings and numbers
+	// (least recently used forgotten first). 0 means the default, 64; a negative value keeps none.
+	CacheEntries int
+	// Analyze computes a bench's report; default analysis.Run. Tests count calls through it.
+	Analyze func(*optics.Bench) (*optics.Report, error)
 }
 
 // Server answers raytable's web requests.
@@ -40,17 +48,28 @@ type Server struct {
 	now    func() time.Time
 	random io.Reader
 	router chi.Router
+	// analyze computes a report; the cache keeps it for stored revisions (compute.go).
+	analyze func(*optics.Bench) (*optics.Report, error)
+	cache   *revCache
 }
 
 // New builds a server and its routes.
 func New(cfg Config) *Server {
-	s := &Server{store: cfg.Store, log: cfg.Logger, now: cfg.Now, random: cfg.Random}
+	s := &Server{store: cfg.Store, log: cfg.Logger, now: cfg.Now, random: cfg.Random, analyze: cfg.Analyze}
 	if s.log == nil {
 		s.log = slog.New(slog.DiscardHandler)
 	}
 	if s.now == nil {
 		s.now = time.Now
 	}
+	if s.analyze == nil {
+		s.analyze = analysis.Run
+	}
+	entries := cfg.CacheEntries
+	if entries == 0 {
+		entries = defaultCacheEntries
+	}
+	s.cache = newRevCache(entries)
 	s.router = s.routes()
 	return s
 }
