@@ -3,6 +3,8 @@ package server
 import (
 	"container/list"
 	"sync"
+
+	"raytable/web/view"
 )
 
 // defaultCacheEntries is how many revisions keep their computed results when Config does not say.
@@ -36,7 +38,7 @@ type revEntry struct {
 // them, so the side view with and without the paraxial overlay are two items.
 type artifact struct {
 	kind string // one of the art* constants
-	opts resultOptions
+	opts view.DrawOptions
 }
 
 const (

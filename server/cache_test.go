@@ -12,6 +12,7 @@ import (
 	"raytable/optics"
 	"raytable/optics/analysis"
 	"raytable/server/store"
+	"raytable/web/view"
 )
 
 // countingServer is a test server whose analysis counts its calls.
@@ -194,7 +195,7 @@ func TestMemoKeepsValuesNotErrors(t *testing.T) {
 		t.Errorf("compute ran %d times, want 2 (the error is not kept)", calls)
 	}
 	// The same kind with other drawing options is another value.
-	other := artifact{kind: artReport, opts: resultOptions{paraxial: true}}
+	other := artifact{kind: artReport, opts: view.DrawOptions{Paraxial: true}}
 	if _, err := memo(c, "x", other, compute); err != nil || calls != 3 {
 		t.Errorf("other options: err %v, calls %d; want a fresh computation", err, calls)
 	}

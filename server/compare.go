@@ -1,13 +1,11 @@
 package server
 
 import (
-	"math"
 	"net/http"
 	"regexp"
 	"strings"
 
 	"raytable/optics"
-	"raytable/web/diagram"
 	"raytable/web/view"
 )
 
@@ -69,22 +67,11 @@ func (s *Server) compare(w http.ResponseWriter, r *http.Request) {
 		s.fail(w, r, err)
 		return
 	}
-	// One common scale: the larger path length and the coarser mm-per-px of the two.
-	so := diagram.SideOptions{WidthPX: pageSideWidthPX, HeightPX: pageSideHeightPX}
-	so.Exaggeration = math.Min(autoExaggeration(ra, so), autoExaggeration(rb, so))
-	so.ZMaxMM = math.Max(diagram.PathLengthMM(ra), diagram.PathLengthMM(rb))
-	so.MMPerPX = math.Max(diagram.SideMMPerPX(ra, so), diagram.SideMMPerPX(rb, so))
-	to := diagram.TableOptions{WidthPX: pageTableWidthPX}
-	to.MMPerPX = math.Max(diagram.TableMMPerPX(ds[0].bench, ra, to), diagram.TableMMPerPX(ds[1].bench, rb, to))
-	side := func(d design, rep *optics.Report) view.CompareSide {
-		return view.CompareSide{
-			ID: d.rev.ID, URL: "/r/" + d.rev.ID, Title: title(d.bench),
-			SideSVG:  inlineSVG(diagram.Side(rep, so)),
-			TableSVG: inlineSVG(diagram.Table(d.bench, rep, to)),
-		}
+	p.A, p.B = view.CompareSides(ds[0].bench, ra, ds[1].bench, rb)
+	for i, side := range []*view.CompareSide{&p.A, &p.B} {
+		side.ID, side.URL = ds[i].rev.ID, "/r/"+ds[i].rev.ID
 	}
-	p.A, p.B = side(ds[0], ra), side(ds[1], rb)
-	p.Rows, p.Changed = compareRows(ra, rb)
+	p.Rows, p.Changed = view.CompareRows(ra, rb)
 	p.HasResult = true
 	p.InputA, p.InputB = ds[0].rev.ID, ds[1].rev.ID
 	s.render(w, r, http.StatusOK, view.Compare(p))

@@ -4,7 +4,6 @@ import (
 	"bytes"
 	"encoding/json"
 	"net/http"
-	"strings"
 
 	"github.com/go-chi/chi/v5"
 
@@ -12,16 +11,6 @@ import (
 	"raytable/server/store"
 	"raytable/web/diagram"
 	"raytable/web/view"
-)
-
-// Diagram sizes in px: the bench page, and the larger presentation view.
-const (
-	pageSideWidthPX    = 960
-	pageSideHeightPX   = 360
-	pageTableWidthPX   = 960
-	presentSideWidthPX = 1400
-	presentSideHeightX = 520
-	presentTableWidth  = 1400
 )
 
 // design is one stored revision, decoded.
@@ -78,13 +67,13 @@ func (s *Server) reportJSONBytes(d design) ([]byte, error) {
 }
 
 // revResult is a stored revision's diagrams and numbers at the sizes o gives.
-func (s *Server) revResult(d design, o resultOptions) (view.Result, error) {
+func (s *Server) revResult(d design, o view.DrawOptions) (view.Result, error) {
 	rep, err := s.report(d)
 	if err != nil {
 		return view.Result{}, err
 	}
 	return memo(s.cache, d.rev.ID, artifact{kind: artResult, opts: o}, func() (view.Result, error) {
-		return result(d.bench, rep, o), nil
+		return view.NewResult(d.bench, rep, o), nil
 	})
 }
 
@@ -97,48 +86,19 @@ func (s *Server) revSVG(d design, kind string, paraxial bool) ([]byte, error) {
 	}
 	a := artifact{kind: kind}
 	if kind == artSideSVG {
-		a.opts = resultOptions{sideWidth: pageSideWidthPX, sideHeight: pageSideHeightPX, paraxial: paraxial}
+		a.opts = view.PageDrawing.WithParaxial(paraxial)
 	}
 	return memo(s.cache, d.rev.ID, a, func() ([]byte, error) {
 		switch kind {
 		case artSideSVG:
-			return diagram.Side(rep, sideOptions(rep, a.opts.sideWidth, a.opts.sideHeight, paraxial)), nil
+			return diagram.Side(rep, a.opts.Side(rep)), nil
 		case artTableSVG:
-			return diagram.Table(d.bench, rep, diagram.TableOptions{WidthPX: pageTableWidthPX}), nil
+			return diagram.Table(d.bench, rep, view.PageDrawing.Table()), nil
 		case artPlanSVG:
 			return diagram.Plan(d.bench, rep), nil
 		}
 		return nil, optics.Errorf(optics.EInternal, "no drawing named %q", kind)
 	})
-}
-
-// inlineSVG drops the XML prolog and leading comments of a standalone SVG so that it can sit
-// inside an HTML page.
-func inlineSVG(svg []byte) string {
-	if i := bytes.Index(svg, []byte("<svg")); i > 0 {
-		svg = svg[i:]
-	}
-	return strings.TrimSpace(string(svg))
-}
-
-// resultOptions choose the drawing sizes of a result.
-type resultOptions struct {
-	sideWidth, sideHeight, tableWidth int
-	paraxial                          bool
-}
-
-var (
-	pageResult    = resultOptions{sideWidth: pageSideWidthPX, sideHeight: pageSideHeightPX, tableWidth: pageTableWidthPX}
-	presentResult = resultOptions{sideWidth: presentSideWidthPX, sideHeight: presentSideHeightX, tableWidth: presentTableWidth}
-)
-
-// result draws a computed bench: the side and table views inline, and the numbers.
-func result(b *optics.Bench, r *optics.Report, o resultOptions) view.Result {
-	return view.Result{
-		SideSVG:  inlineSVG(diagram.Side(r, sideOptions(r, o.sideWidth, o.sideHeight, o.paraxial))),
-		TableSVG: inlineSVG(diagram.Table(b, r, diagram.TableOptions{WidthPX: o.tableWidth})),
-		Numbers:  numbersPanel(r),
-	}
 }
 
 // links are the addresses of one revision's pages.
@@ -162,17 +122,3 @@ func links(d design, paraxial bool) view.Links {
 
 // when writes a revision's time for people, in UTC so that shared links read the same everywhere.
 func when(d design) string { return d.rev.Created.UTC().Format("2006-01-02 15:04 UTC") }
-
-func title(b *optics.Bench) string {
-	if strings.TrimSpace(b.Title) == "" {
-		return "Untitled bench"
-	}
-	return b.Title
-}
-
-// sideOptions are the side view's options at a size, with the automatic vertical exaggeration.
-func sideOptions(r *optics.Report, width, height int, paraxial bool) diagram.SideOptions {
-	o := diagram.SideOptions{WidthPX: width, HeightPX: height, ShowParaxial: paraxial}
-	o.Exaggeration = autoExaggeration(r, o)
-	return o
-}

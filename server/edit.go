@@ -33,7 +33,7 @@ const maxSummary = 200
 
 // summarize is the line a revision shows in lists: what changed, or how it started.
 func summarize(parent, b *optics.Bench, start string) string {
-	s := title(b)
+	s := view.BenchTitle(b)
 	if parent == nil {
 		s += " · " + start
 	} else if lines := optics.Diff(parent, b); len(lines) > 0 {
@@ -156,7 +156,7 @@ func (s *Server) edit(w http.ResponseWriter, r *http.Request) {
 // and numbers are those of the stored revision, the last valid state.
 func (s *Server) invalidEdit(w http.ResponseWriter, r *http.Request, d design, b *optics.Bench, values map[string]string, problems []optics.Problem) {
 	var res view.Result
-	if stored, err := s.revResult(d, pageResult); err == nil {
+	if stored, err := s.revResult(d, view.PageDrawing); err == nil {
 		res = stored
 	} else {
 		res.Problem = "The stored design could not be computed."
@@ -198,7 +198,7 @@ func (s *Server) preview(w http.ResponseWriter, r *http.Request) {
 			s.fail(w, r, err)
 			return
 		}
-		res = result(b, rep, pageResult)
+		res = view.NewResult(b, rep, view.PageDrawing)
 	}
 	s.render(w, r, status, view.ResultFragment(res))
 }

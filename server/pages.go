@@ -36,9 +36,7 @@ func (s *Server) benchPage(w http.ResponseWriter, r *http.Request) {
 		return
 	}
 	paraxial := r.URL.Query().Get("paraxial") == "1"
-	o := pageResult
-	o.paraxial = paraxial
-	res, err := s.revResult(d, o)
+	res, err := s.revResult(d, view.PageDrawing.WithParaxial(paraxial))
 	if err != nil {
 		s.fail(w, r, err)
 		return
@@ -48,7 +46,7 @@ func (s *Server) benchPage(w http.ResponseWriter, r *http.Request) {
 }
 
 func (s *Server) benchPageModel(d design, paraxial bool, form view.BenchForm, res view.Result) view.BenchPage {
-	return view.BenchPage{ID: d.rev.ID, Title: title(d.bench), Created: when(d), Links: links(d, paraxial), Form: form, Result: res}
+	return view.BenchPage{ID: d.rev.ID, Title: view.BenchTitle(d.bench), Created: when(d), Links: links(d, paraxial), Form: form, Result: res}
 }
 
 // presentPage is the read-only view for showing a design to someone.
@@ -58,16 +56,15 @@ func (s *Server) presentPage(w http.ResponseWriter, r *http.Request) {
 		s.fail(w, r, err)
 		return
 	}
-	o := presentResult
-	o.paraxial = r.URL.Query().Get("paraxial") == "1"
-	res, err := s.revResult(d, o)
+	paraxial := r.URL.Query().Get("paraxial") == "1"
+	res, err := s.revResult(d, view.PresentDrawing.WithParaxial(paraxial))
 	if err != nil {
 		s.fail(w, r, err)
 		return
 	}
 	s.render(w, r, http.StatusOK, view.Present(view.PresentPage{
-		ID: d.rev.ID, Title: title(d.bench), Notes: d.bench.Notes, Created: when(d),
-		Links: links(d, o.paraxial), Result: res,
+		ID: d.rev.ID, Title: view.BenchTitle(d.bench), Notes: d.bench.Notes, Created: when(d),
+		Links: links(d, paraxial), Result: res,
 	}))
 }
 
@@ -81,14 +78,14 @@ func (s *Server) history(w http.ResponseWriter, r *http.Request) {
 		s.fail(w, r, err)
 		return
 	}
-	p := view.HistoryPage{ID: d.rev.ID, Title: title(d.bench), Links: links(d, false)}
+	p := view.HistoryPage{ID: d.rev.ID, Title: view.BenchTitle(d.bench), Links: links(d, false)}
 	cur := d
 	for step := 0; ; step++ {
 		if step == maxHistory {
 			p.Truncated = true
 			break
 		}
-		hs := view.HistoryStep{ID: cur.rev.ID, URL: "/r/" + cur.rev.ID, Created: when(cur), Title: title(cur.bench), Current: step == 0}
+		hs := view.HistoryStep{ID: cur.rev.ID, URL: "/r/" + cur.rev.ID, Created: when(cur), Title: view.BenchTitle(cur.bench), Current: step == 0}
 		if cur.rev.Parent == "" {
 			p.Steps = append(p.Steps, hs)
 			break

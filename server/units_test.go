@@ -97,17 +97,3 @@ func TestFormatNumberRoundTrips(t *testing.T) {
 		}
 	}
 }
-
-func TestNum(t *testing.T) {
-	for _, tc := range []struct {
-		in   float64
-		want string
-	}{
-		{0, "0"}, {math.Copysign(0, -1), "0"}, {1e-20, "1e-20"}, {130.1749, "130.17"}, {-41.5617, "-41.562"},
-		{0.000349071, "0.00034907"}, {123456.7, "123460"}, {math.NaN(), "—"}, {math.Inf(1), "—"},
-	} {
-		if got := num(tc.in); got != tc.want {
-			t.Errorf("num(%v) = %q, want %q", tc.in, got, tc.want)
-		}
-	}
-}

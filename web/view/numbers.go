@@ -1,4 +1,4 @@
-package server
+package view
 
 import (
 	"fmt"
@@ -8,7 +8,6 @@ import (
 	"strings"
 
 	"raytable/optics"
-	"raytable/web/view"
 )
 
 // num writes a number for people: rounded to five significant digits, without an exponent for
@@ -62,9 +61,9 @@ var systemRows = []systemRow{
 	{"Lagrange invariant (mm)", func(p *optics.PlaneValues) string { return optNum(p.LagrangeInvariant) }},
 }
 
-// numbersPanel lays out a report as the tables of the numbers panel.
-func numbersPanel(r *optics.Report) view.Numbers {
-	var n view.Numbers
+// NumbersPanel lays out a report as the tables of the numbers panel.
+func NumbersPanel(r *optics.Report) Numbers {
+	var n Numbers
 	n.Tables = append(n.Tables, systemTable(r))
 	if len(r.Chromatic) > 1 {
 		n.Tables = append(n.Tables, chromaticTable(r))
@@ -92,8 +91,8 @@ func warningText(w optics.Warning) string {
 	return w.Element + ": " + w.Message
 }
 
-func systemTable(r *optics.Report) view.Table {
-	t := view.Table{Title: "System", TestID: "system-values", Head: []string{"value", "in the table plane", "across it (sagittal)"}}
+func systemTable(r *optics.Report) Table {
+	t := Table{Title: "System", TestID: "system-values", Head: []string{"value", "in the table plane", "across it (sagittal)"}}
 	if !r.System.Optical {
 		t.Note = "The bench has no lens, thin lens or mirror, so it has no system values."
 		return t
@@ -110,7 +109,7 @@ func systemTable(r *optics.Report) view.Table {
 			cells[2] = b
 			differ = true
 		}
-		t.Rows = append(t.Rows, view.Row{Cells: cells, Marked: a != b})
+		t.Rows = append(t.Rows, Row{Cells: cells, Marked: a != b})
 	}
 	if tan.Afocal {
 		t.Note = "Afocal: parallel light leaves parallel, so there is no focal length."
@@ -125,16 +124,16 @@ func systemTable(r *optics.Report) view.Table {
 	return t
 }
 
-func chromaticTable(r *optics.Report) view.Table {
-	t := view.Table{Title: "At each wavelength", TestID: "chromatic", Head: []string{"wavelength (nm)", "EFL (mm)", "BFL (mm)", "image distance (mm)"}}
+func chromaticTable(r *optics.Report) Table {
+	t := Table{Title: "At each wavelength", TestID: "chromatic", Head: []string{"wavelength (nm)", "EFL (mm)", "BFL (mm)", "image distance (mm)"}}
 	for _, c := range r.Chromatic {
-		t.Rows = append(t.Rows, view.Row{Cells: []string{num(c.WavelengthNM), optNum(c.EFLMM), optNum(c.BFLMM), optNum(c.ImageDistanceMM)}})
+		t.Rows = append(t.Rows, Row{Cells: []string{num(c.WavelengthNM), optNum(c.EFLMM), optNum(c.BFLMM), optNum(c.ImageDistanceMM)}})
 	}
 	return t
 }
 
-func elementsTable(r *optics.Report) view.Table {
-	t := view.Table{
+func elementsTable(r *optics.Report) Table {
+	t := Table{
 		Title: "Elements", TestID: "elements-table",
 		Head: []string{"id", "type", "along the path (mm)", "table x (mm)", "table y (mm)", "heading in → out (°)",
 			"marginal ray (mm)", "chief ray (mm)", "largest ray (mm)", "clear radius (mm)", "use of aperture"},
@@ -144,7 +143,7 @@ func elementsTable(r *optics.Report) view.Table {
 		if e.Clearance != nil {
 			use = percent(*e.Clearance)
 		}
-		t.Rows = append(t.Rows, view.Row{
+		t.Rows = append(t.Rows, Row{
 			Cells: []string{e.ID, e.Type, num(e.PathMM), num(e.TableXMM), num(e.TableYMM),
 				num(e.HeadingInDeg) + " → " + num(e.HeadingOutDeg),
 				num(e.MarginalYMM), num(e.ChiefYMM), num(e.MaxExactYMM), optNum(e.SemiDiameterMM), use},
@@ -163,8 +162,8 @@ var statusWords = map[string]string{
 	optics.RayMissed:  "missed a surface",
 }
 
-func rayStatusTable(r *optics.Report) view.Table {
-	t := view.Table{Title: "Exact rays", TestID: "ray-status", Head: []string{"status", "rays", "where they stopped"}}
+func rayStatusTable(r *optics.Report) Table {
+	t := Table{Title: "Exact rays", TestID: "ray-status", Head: []string{"status", "rays", "where they stopped"}}
 	counts := map[string]int{}
 	where := map[string]map[string]int{}
 	for _, ray := range r.Rays {
@@ -182,18 +181,18 @@ func rayStatusTable(r *optics.Report) view.Table {
 			places = append(places, fmt.Sprintf("%s (%d)", id, c))
 		}
 		sort.Strings(places)
-		t.Rows = append(t.Rows, view.Row{Cells: []string{statusWords[s], strconv.Itoa(counts[s]), strings.Join(places, ", ")}, Marked: s != optics.RayOK && counts[s] > 0})
+		t.Rows = append(t.Rows, Row{Cells: []string{statusWords[s], strconv.Itoa(counts[s]), strings.Join(places, ", ")}, Marked: s != optics.RayOK && counts[s] > 0})
 	}
 	return t
 }
 
-func beamTable(b *optics.BeamReport) view.Table {
-	t := view.Table{
+func beamTable(b *optics.BeamReport) Table {
+	t := Table{
 		Title: fmt.Sprintf("Laser beam at %s nm, M² %s (leaving each element)", num(b.WavelengthNM), num(b.M2)), TestID: "beam-table",
 		Head: []string{"id", "radius in plane (mm)", "radius across (mm)", "wavefront radius in plane (mm)", "wavefront radius across (mm)", "power passed"},
 	}
 	for _, e := range b.Elements {
-		t.Rows = append(t.Rows, view.Row{Cells: []string{e.ID, num(e.WTMM), num(e.WSMM), optNumOr(e.RTMM, "flat"), optNumOr(e.RSMM, "flat"), percent(e.Transmitted)}, Marked: e.Transmitted < 0.99})
+		t.Rows = append(t.Rows, Row{Cells: []string{e.ID, num(e.WTMM), num(e.WSMM), optNumOr(e.RTMM, "flat"), optNumOr(e.RSMM, "flat"), percent(e.Transmitted)}, Marked: e.Transmitted < 0.99})
 	}
 	return t
 }
@@ -205,14 +204,14 @@ func optNumOr(v *float64, none string) string {
 	return num(*v)
 }
 
-func waistTable(b *optics.BeamReport) view.Table {
-	t := view.Table{Title: "Beam waists", TestID: "waists", Head: []string{"after", "along the path (mm)", "radius in plane (mm)", "radius across (mm)", "Rayleigh range in plane (mm)", "Rayleigh range across (mm)"}}
+func waistTable(b *optics.BeamReport) Table {
+	t := Table{Title: "Beam waists", TestID: "waists", Head: []string{"after", "along the path (mm)", "radius in plane (mm)", "radius across (mm)", "Rayleigh range in plane (mm)", "Rayleigh range across (mm)"}}
 	for _, w := range b.Waists {
 		after := "the source"
 		if w.After != nil {
 			after = *w.After
 		}
-		t.Rows = append(t.Rows, view.Row{Cells: []string{after, num(w.PathMM), optNum(w.RadiusTMM), optNum(w.RadiusSMM), optNum(w.RayleighTMM), optNum(w.RayleighSMM)}})
+		t.Rows = append(t.Rows, Row{Cells: []string{after, num(w.PathMM), optNum(w.RadiusTMM), optNum(w.RadiusSMM), optNum(w.RayleighTMM), optNum(w.RayleighSMM)}})
 	}
 	if len(b.Waists) == 0 {
 		t.Note = "No waist between the source and the last element."
@@ -220,26 +219,26 @@ func waistTable(b *optics.BeamReport) view.Table {
 	return t
 }
 
-func placementTable(ps []optics.Placement) view.Table {
-	t := view.Table{Title: "Placement on the breadboard", TestID: "placement", Head: []string{"id", "type", "x (mm)", "y (mm)", "heading (°)", "hole column", "hole row", "offset x (mm)", "offset y (mm)"}}
+func placementTable(ps []optics.Placement) Table {
+	t := Table{Title: "Placement on the breadboard", TestID: "placement", Head: []string{"id", "type", "x (mm)", "y (mm)", "heading (°)", "hole column", "hole row", "offset x (mm)", "offset y (mm)"}}
 	for _, p := range ps {
 		col, row := "—", "—"
 		if p.HoleColumn > 0 {
 			col, row = strconv.Itoa(p.HoleColumn), strconv.Itoa(p.HoleRow)
 		}
-		t.Rows = append(t.Rows, view.Row{Cells: []string{p.ID, p.Type, num(p.TableXMM), num(p.TableYMM), num(p.HeadingDeg), col, row, num(p.OffsetXMM), num(p.OffsetYMM)}})
+		t.Rows = append(t.Rows, Row{Cells: []string{p.ID, p.Type, num(p.TableXMM), num(p.TableYMM), num(p.HeadingDeg), col, row, num(p.OffsetXMM), num(p.OffsetYMM)}})
 	}
 	return t
 }
 
-func mediaTable(ms []optics.MediumIndex) view.Table {
-	t := view.Table{Title: "Media", TestID: "media", Head: []string{"material", "wavelength (nm)", "index", "within its data range"}}
+func mediaTable(ms []optics.MediumIndex) Table {
+	t := Table{Title: "Media", TestID: "media", Head: []string{"material", "wavelength (nm)", "index", "within its data range"}}
 	for _, m := range ms {
 		in := "yes"
 		if !m.InRange {
 			in = "no"
 		}
-		t.Rows = append(t.Rows, view.Row{Cells: []string{m.Material, num(m.WavelengthNM), strconv.FormatFloat(m.Index, 'f', 6, 64), in}, Marked: !m.InRange})
+		t.Rows = append(t.Rows, Row{Cells: []string{m.Material, num(m.WavelengthNM), strconv.FormatFloat(m.Index, 'f', 6, 64), in}, Marked: !m.InRange})
 	}
 	return t
 }

@@ -1,4 +1,4 @@
-package server
+package view
 
 import (
 	"math"
@@ -34,11 +34,11 @@ func contentHalfMM(r *optics.Report) float64 {
 	return y
 }
 
-// autoExaggeration is the vertical exaggeration that lets the heights fill the side view at the
+// AutoExaggeration is the vertical exaggeration that lets the heights fill the side view at the
 // horizontal scale o gives: a round number (1, 2, 5 times a power of ten), 1 when none is needed.
 // Benches are long and thin (a metre of path, a centimetre of beam), so without it every ray
 // would sit on the axis.
-func autoExaggeration(r *optics.Report, o diagram.SideOptions) float64 {
+func AutoExaggeration(r *optics.Report, o diagram.SideOptions) float64 {
 	half := contentHalfMM(r)
 	plotPX := float64(o.HeightPX - sideChromePX)
 	if half <= 0 || plotPX <= 0 {

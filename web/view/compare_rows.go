@@ -1,11 +1,10 @@
-package server
+package view
 
 import (
 	"fmt"
 	"math"
 
 	"raytable/optics"
-	"raytable/web/view"
 )
 
 // item is one number of a report, named so that the same number of two reports can be paired.
@@ -15,7 +14,8 @@ type item struct {
 	text string
 }
 
-func f(v float64) *float64 { return &v }
+// ptr gives a computed value the pointer form that optional report values have.
+func ptr(v float64) *float64 { return &v }
 
 // reportItems lists every number of a report that the compare page shows, in a fixed order.
 func reportItems(r *optics.Report) []item {
@@ -40,15 +40,15 @@ func reportItems(r *optics.Report) []item {
 	}
 	for _, e := range r.Elements {
 		k := e.ID + " "
-		addNum(k+"along the path (mm)", f(e.PathMM))
-		addNum(k+"table x (mm)", f(e.TableXMM))
-		addNum(k+"table y (mm)", f(e.TableYMM))
-		addNum(k+"heading out (°)", f(e.HeadingOutDeg))
-		addNum(k+"marginal ray (mm)", f(e.MarginalYMM))
-		addNum(k+"chief ray (mm)", f(e.ChiefYMM))
-		addNum(k+"largest ray (mm)", f(e.MaxExactYMM))
+		addNum(k+"along the path (mm)", ptr(e.PathMM))
+		addNum(k+"table x (mm)", ptr(e.TableXMM))
+		addNum(k+"table y (mm)", ptr(e.TableYMM))
+		addNum(k+"heading out (°)", ptr(e.HeadingOutDeg))
+		addNum(k+"marginal ray (mm)", ptr(e.MarginalYMM))
+		addNum(k+"chief ray (mm)", ptr(e.ChiefYMM))
+		addNum(k+"largest ray (mm)", ptr(e.MaxExactYMM))
 		if e.Clearance != nil {
-			addNum(k+"use of aperture (%)", f(*e.Clearance*100))
+			addNum(k+"use of aperture (%)", ptr(*e.Clearance*100))
 		}
 	}
 	counts := map[string]float64{}
@@ -56,17 +56,17 @@ func reportItems(r *optics.Report) []item {
 		counts[ray.Status]++
 	}
 	for _, s := range []string{optics.RayOK, optics.RayClipped, optics.RayTIR, optics.RayMissed} {
-		addNum("rays "+statusWords[s], f(counts[s]))
+		addNum("rays "+statusWords[s], ptr(counts[s]))
 	}
 	if r.Beam != nil {
 		for _, e := range r.Beam.Elements {
-			addNum(e.ID+" beam radius in plane (mm)", f(e.WTMM))
-			addNum(e.ID+" beam radius across (mm)", f(e.WSMM))
-			addNum(e.ID+" power passed (%)", f(e.Transmitted*100))
+			addNum(e.ID+" beam radius in plane (mm)", ptr(e.WTMM))
+			addNum(e.ID+" beam radius across (mm)", ptr(e.WSMM))
+			addNum(e.ID+" power passed (%)", ptr(e.Transmitted*100))
 		}
 		for i, w := range r.Beam.Waists {
 			k := fmt.Sprintf("waist %d ", i+1)
-			addNum(k+"along the path (mm)", f(w.PathMM))
+			addNum(k+"along the path (mm)", ptr(w.PathMM))
 			addNum(k+"radius in plane (mm)", w.RadiusTMM)
 			addNum(k+"radius across (mm)", w.RadiusSMM)
 		}
@@ -74,7 +74,7 @@ func reportItems(r *optics.Report) []item {
 	for _, p := range r.Placement {
 		addText(p.ID+" hole (column, row)", fmt.Sprintf("%d, %d", p.HoleColumn, p.HoleRow))
 	}
-	addNum("warnings", f(float64(len(r.Warnings))))
+	addNum("warnings", ptr(float64(len(r.Warnings))))
 	return out
 }
 
@@ -82,8 +82,9 @@ func reportItems(r *optics.Report) []item {
 // anything shown with five digits, well above rounding noise.
 const sameTolerance = 1e-9
 
-// compareRows pairs the items of two reports by key, keeping a's order and then b's extra keys.
-func compareRows(a, b *optics.Report) (rows []view.CompareRow, changed int) {
+// CompareRows pairs the numbers of two reports by name, keeping a's order and then b's extra
+// names, and counts the rows whose value changed.
+func CompareRows(a, b *optics.Report) (rows []CompareRow, changed int) {
 	ia, ib := reportItems(a), reportItems(b)
 	byKey := map[string]item{}
 	for _, it := range ib {
@@ -91,7 +92,7 @@ func compareRows(a, b *optics.Report) (rows []view.CompareRow, changed int) {
 	}
 	seen := map[string]bool{}
 	emit := func(key string, x, y *item) {
-		row := view.CompareRow{Label: key, A: "—", B: "—"}
+		row := CompareRow{Label: key, A: "—", B: "—"}
 		if x != nil {
 			row.A = x.text
 		}
