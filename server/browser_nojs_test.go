@@ -224,7 +224,7 @@ func TestBrowserWithoutJavaScript(t *testing.T) {
 		const f = document.querySelector('[data-testid=field][data-field="`+gapName+`"]');
 		if (!f) return {};
 		const input = f.querySelector('input'), err = f.querySelector('[data-testid=field-error]');
-		return {bad: String(f.classList.contains('bad')), value: input.value, invalid: String(input.hasAttribute('aria-invalid')),
+		return {bad: String(f.classList.contains('bad')), value: input.value, invalid: input.getAttribute('aria-invalid'),
 			message: err ? err.textContent : ''};
 	})()`)
 	if field["bad"] != "true" || field["invalid"] != "true" || strings.TrimSpace(field["message"]) == "" {

@@ -9,6 +9,7 @@ import (
 
 	"github.com/a-h/templ"
 	"github.com/go-chi/chi/v5"
+	"github.com/go-chi/chi/v5/middleware"
 
 	"raytable/optics"
 	"raytable/optics/analysis"
@@ -79,7 +80,8 @@ func (s *Server) ServeHTTP(w http.ResponseWriter, r *http.Request) { s.router.Se
 
 func (s *Server) routes() chi.Router {
 	r := chi.NewRouter()
-	r.Use(logRequests(s.log), securityHeaders, recoverPanics(s.log, s.failStatus), limitBody(maxBodyBytes))
+	// GetHead answers HEAD on every GET route, for link checkers and curl -I.
+	r.Use(logRequests(s.log), securityHeaders, recoverPanics(s.log, s.failStatus), limitBody(maxBodyBytes), middleware.GetHead)
 	r.NotFound(func(w http.ResponseWriter, r *http.Request) { s.failStatus(w, r, http.StatusNotFound) })
 	r.MethodNotAllowed(func(w http.ResponseWriter, r *http.Request) { s.failStatus(w, r, http.StatusMethodNotAllowed) })
 
@@ -89,7 +91,13 @@ func (s *Server) routes() chi.Router {
 	r.Post("/demo", s.demo)
 	r.Get("/compare", s.compare)
 	r.Handle("/static/*", http.StripPrefix("/static/", staticFiles()))
+	// Browsers ask for /favicon.ico by themselves, e.g. when a drawing is opened on its own.
+	r.Get("/favicon.ico", func(w http.ResponseWriter, r *http.Request) {
+		r.URL.Path = "/icon.svg"
+		staticFiles().ServeHTTP(w, r)
+	})
 	r.Route("/r/{id}", func(r chi.Router) {
+		r.Use(middleware.GetHead) // the mount matches HEAD above; its own routes need it again
 		r.Get("/", s.benchPage)
 		r.Get("/view", s.presentPage)
 		r.Get("/history", s.history)

@@ -40,7 +40,7 @@ func layout(title string) templ.Component {
 		if templ_7745c5c3_Err != nil {
 			return templ_7745c5c3_Err
 		}
-		templ_7745c5c3_Err = templruntime.WriteString(templ_7745c5c3_Buffer, 2, " · raytable</title><link rel=\"icon\" href=\"data:,\"><link rel=\"stylesheet\" href=\"/static/raytable.css\"><script src=\"/static/raytable.js\" defer></script></head><body><header class=\"top\" data-testid=\"top\"><a class=\"brand\" href=\"/\">raytable</a> <span class=\"tagline\">optical benches on a breadboard</span></header><main id=\"main\">")
+		templ_7745c5c3_Err = templruntime.WriteString(templ_7745c5c3_Buffer, 2, " · raytable</title><link rel=\"icon\" href=\"/static/icon.svg\" type=\"image/svg+xml\"><link rel=\"stylesheet\" href=\"/static/raytable.css\"><script src=\"/static/raytable.js\" defer></script></head><body><header class=\"top\" data-testid=\"top\"><a class=\"brand\" href=\"/\">raytable</a> <span class=\"tagline\">optical benches on a breadboard</span></header><main id=\"main\">")
 		if templ_7745c5c3_Err != nil {
 			return templ_7745c5c3_Err
 		}

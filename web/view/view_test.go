@@ -88,8 +88,9 @@ func TestFieldMarksItsError(t *testing.T) {
 	if v, _ := attrOf(input, "name"); v != "elements[1].gap_mm" {
 		t.Errorf("input name %q, want the JSON path", v)
 	}
-	if _, ok := attrOf(input, "aria-invalid"); !ok {
-		t.Error("input not marked aria-invalid")
+	// WAI-ARIA: only the value "true" marks a field invalid; an empty value counts as false.
+	if v, _ := attrOf(input, "aria-invalid"); v != "true" {
+		t.Errorf("input aria-invalid = %q, want true", v)
 	}
 	if msg.FirstChild == nil || msg.FirstChild.Data != `"abc" is not a length` {
 		t.Errorf("message %v", msg.FirstChild)
