@@ -13,25 +13,25 @@ import (
 // maxBenchBytes caps a bench file read from disk or standard input.
 const maxBenchBytes = 1 << 20
 
-// readBench reads, decodes and computes a bench from a path, or from standard input for "-".
+// computeBench reads, decodes and computes a bench from a path, or from standard input for "-".
 // On failure it prints what went wrong and returns the exit status to use.
-func readBench(e env, path string) (*optics.Bench, *optics.Report, int) {
+func computeBench(e env, path string) (*optics.Report, int) {
 	data, err := readInput(e, path)
 	if err != nil {
 		fmt.Fprintf(e.stderr, "raytable: %v\n", err)
-		return nil, nil, exitInvalid
+		return nil, exitInvalid
 	}
 	b, err := optics.Decode(data)
 	if err == nil {
 		var r *optics.Report
 		r, err = analysis.Run(b)
 		if err == nil {
-			return b, r, exitOK
+			return r, exitOK
 		}
 	}
 	if code := optics.ErrorCode(err); code == optics.EInternal {
 		fmt.Fprintf(e.stderr, "raytable: internal failure: %v\n", err)
-		return nil, nil, exitInternal
+		return nil, exitInternal
 	}
 	fmt.Fprintf(e.stderr, "raytable: %s is not a valid bench:\n", displayName(path))
 	if problems := optics.ErrorProblems(err); len(problems) > 0 {
@@ -41,7 +41,7 @@ func readBench(e env, path string) (*optics.Bench, *optics.Report, int) {
 	} else {
 		fmt.Fprintf(e.stderr, "  %v\n", err)
 	}
-	return nil, nil, exitInvalid
+	return nil, exitInvalid
 }
 
 func readInput(e env, path string) ([]byte, error) {

@@ -3,7 +3,6 @@ package main
 import (
 	"context"
 	"encoding/csv"
-	"flag"
 	"fmt"
 	"strings"
 	"text/tabwriter"
@@ -14,23 +13,12 @@ import (
 // runPlan prints the breadboard placement list of a bench: where each mount's post goes and the
 // nearest hole of the grid. --csv writes it for spreadsheets, with formula-like cells made inert.
 func runPlan(_ context.Context, e env) int {
-	fs := flag.NewFlagSet("plan", flag.ContinueOnError)
-	fs.SetOutput(e.stderr)
-	asCSV := fs.Bool("csv", false, "print the placement list as CSV")
-	fs.Usage = func() {
-		fmt.Fprintln(e.stderr, "usage: raytable plan FILE|- [--csv]")
-		fs.PrintDefaults()
-	}
-	path, code, ok := oneFileArg(fs, e.args)
-	if !ok {
-		return code
-	}
-	_, r, code := readBench(e, path)
-	if code != exitOK {
+	asCSV, r, code := fileCommand(e, "plan", "csv", "print the placement list as CSV")
+	if r == nil {
 		return code
 	}
 	rows := layout.PlacementRows(r.Placement)
-	if *asCSV {
+	if asCSV {
 		cw := csv.NewWriter(e.stdout)
 		if err := cw.WriteAll(rows); err != nil {
 			fmt.Fprintf(e.stderr, "raytable: %v\n", err)

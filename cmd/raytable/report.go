@@ -6,27 +6,18 @@ import (
 	"errors"
 	"flag"
 	"fmt"
+
+	"raytable/optics"
 )
 
 // runReport prints the computed numbers of one bench file: aligned tables by default, the
 // raytable/report/v1 JSON with --json.
 func runReport(_ context.Context, e env) int {
-	fs := flag.NewFlagSet("report", flag.ContinueOnError)
-	fs.SetOutput(e.stderr)
-	asJSON := fs.Bool("json", false, "print the report as JSON (format raytable/report/v1)")
-	fs.Usage = func() {
-		fmt.Fprintln(e.stderr, "usage: raytable report FILE|- [--json]")
-		fs.PrintDefaults()
-	}
-	path, code, ok := oneFileArg(fs, e.args)
-	if !ok {
+	asJSON, r, code := fileCommand(e, "report", "json", "print the report as JSON (format raytable/report/v1)")
+	if r == nil {
 		return code
 	}
-	_, r, code := readBench(e, path)
-	if code != exitOK {
-		return code
-	}
-	if *asJSON {
+	if asJSON {
 		enc := json.NewEncoder(e.stdout)
 		enc.SetIndent("", "  ")
 		if err := enc.Encode(r); err != nil {
@@ -40,6 +31,24 @@ func runReport(_ context.Context, e env) int {
 		return exitInternal
 	}
 	return exitOK
+}
+
+// fileCommand parses the arguments of a subcommand that takes one bench file and one boolean
+// flag, then reads and computes the bench. A nil report means the command is over: code says how.
+func fileCommand(e env, name, flagName, flagHelp string) (bool, *optics.Report, int) {
+	fs := flag.NewFlagSet(name, flag.ContinueOnError)
+	fs.SetOutput(e.stderr)
+	on := fs.Bool(flagName, false, flagHelp)
+	fs.Usage = func() {
+		fmt.Fprintf(e.stderr, "usage: raytable %s FILE|- [--%s]\n", name, flagName)
+		fs.PrintDefaults()
+	}
+	path, code, ok := oneFileArg(fs, e.args)
+	if !ok {
+		return false, nil, code
+	}
+	r, code := computeBench(e, path)
+	return *on, r, code
 }
 
 // oneFileArg parses flags placed before or after a single FILE argument. On failure it returns
