@@ -10,7 +10,7 @@ import (
 	"github.com/chromedp/chromedp"
 )
 
-// browserTab starts headless chromium with the flags TestBrowser uses (no sandbox, background
+// browserTab starts headless chromium with the flags every browser test uses (no sandbox, background
 // networking, component updates and sync off, a throw-away profile) and opens one tab whose
 // events go to listen. Everything is closed when the test ends; the whole session is bounded by
 // browserTimeout.

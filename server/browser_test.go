@@ -139,29 +139,10 @@ const (
 // in a fresh browser context, compare the two revisions, with no failed request and no console
 // error along the way.
 func TestBrowser(t *testing.T) {
-	chromium := findChromium(t)
 	base := startServer(t)
-
-	ctx, cancel := context.WithTimeout(context.Background(), browserTimeout)
-	defer cancel()
-	opts := append(chromedp.DefaultExecAllocatorOptions[:],
-		chromedp.ExecPath(chromium),
-		chromedp.Headless,
-		chromedp.NoSandbox,
-		chromedp.DisableGPU,
-		chromedp.NoFirstRun,
-		chromedp.Flag("disable-background-networking", true),
-		chromedp.Flag("disable-component-update", true),
-		chromedp.Flag("disable-sync", true),
-		chromedp.UserDataDir(t.TempDir()),
-		chromedp.WindowSize(1400, 1000),
-	)
-	allocCtx, cancelAlloc := chromedp.NewExecAllocator(ctx, opts...)
-	defer cancelAlloc()
 	var seen problems
 	defer seen.check(t) // also after a failed step, to show what the browser saw
-	tab, cancelTab := chromedp.NewContext(allocCtx, chromedp.WithListener(seen.listen))
-	defer cancelTab()
+	tab := browserTab(t, seen.listen)
 
 	// Home page, start from the demo.
 	if err := chromedp.Do(tab,
