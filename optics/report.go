@@ -19,6 +19,12 @@ type Report struct {
 	Holes         HoleGrid       `json:"holes"`
 	Placement     []Placement    `json:"placement,omitempty"`
 	Warnings      []Warning      `json:"warnings"`
+
+	// Spacing says how tightly each gap must be held, one row per element up to the element the
+	// image is looked at (see SpacingTolerance); SpacingBasis is the allowance it is measured
+	// against. Both are at the primary wavelength in the tangential plane.
+	Spacing      []SpacingTolerance `json:"spacing"`
+	SpacingBasis SpacingBasis       `json:"spacing_basis"`
 }
 
 // MediumIndex is the index of one medium used on the bench at one wavelength.
@@ -220,4 +226,58 @@ type HoleGrid struct {
 	OffsetMM float64 `json:"offset_mm"`
 	Columns  int     `json:"columns"`
 	Rows     int     `json:"rows"`
+}
+
+// Spacing basis kinds: what a gap error is allowed to spoil.
+const (
+	SpacingDepthOfFocus     = "depth-of-focus"    // the image must stay within the depth of focus
+	SpacingDiffractionAngle = "diffraction-angle" // the output must stay collimated to its diffraction angle
+	SpacingNone             = "none"              // no lens, thin lens or mirror: no gap changes the light
+)
+
+// SpacingTolerance is how one gap (element ID's gap_mm, from the previous element or the source)
+// acts on the output when it alone changes by a small amount and everything downstream moves with
+// it, as on the bench when one spacing changes. Sensitivities are central differences with a
+// step of ±0.01 mm at the primary wavelength in the tangential plane.
+//
+// When the system forms an image at a finite distance (SpacingBasis.Kind "depth-of-focus"),
+// ImageShiftPerMM is d z_image / d gap, z_image being the image position along the path, and
+// DefocusPerMM is d(z_image - z_ref) / d gap, z_ref being the position of the element the image is
+// looked at (SpacingBasis.Reference, the bench's last element or its first dump), which moves with
+// every gap up to its own. ToleranceMM = depth of focus / |DefocusPerMM|.
+//
+// When the output is collimated (Kind "diffraction-angle"), DivergencePerMM is the change of the
+// output marginal ray's slope in rad per mm of gap and ToleranceMM = diffraction angle /
+// |DivergencePerMM|.
+//
+// ToleranceMM is the gap error, either way, that uses up the whole allowance; it is null when the
+// gap does not matter (its sensitivity is zero up to rounding, or the tolerance would exceed
+// MaxLengthMM). Values that do not apply to the basis are null.
+type SpacingTolerance struct {
+	ID              string   `json:"id"`
+	GapMM           float64  `json:"gap_mm"`
+	ImageShiftPerMM *float64 `json:"image_shift_per_mm"`
+	DefocusPerMM    *float64 `json:"defocus_per_mm"`
+	DivergencePerMM *float64 `json:"divergence_per_mm"` // rad per mm of gap
+	ToleranceMM     *float64 `json:"tolerance_mm"`
+}
+
+// SpacingBasis is the allowance the spacing tolerances are measured against, so that the table
+// explains itself.
+//
+// Depth of focus: λ/(2·NA'²) on either side of the image, with λ the primary wavelength and NA'
+// the image-side numerical aperture (system.image_na; image space is always air): Rayleigh's
+// quarter-wave criterion (Born and Wolf, Principles of Optics, sec. 8.8; the section from memory).
+//
+// Diffraction angle: λ/(π·w), the far-field half-angle of a Gaussian beam of radius w, with w the
+// output marginal ray height at the last optical vertex. Holding a collimated beam's divergence
+// below its own diffraction angle is common practice.
+type SpacingBasis struct {
+	Kind           string   `json:"kind"`              // SpacingDepthOfFocus, SpacingDiffractionAngle or SpacingNone
+	WavelengthNM   float64  `json:"wavelength_nm"`     // the primary wavelength
+	Reference      string   `json:"reference"`         // id of the element defocus is measured at
+	DepthOfFocusMM *float64 `json:"depth_of_focus_mm"` // λ/(2·NA'²); null when NA' is 0 or the output is collimated
+	ImageNA        *float64 `json:"image_na"`
+	DivergenceRad  *float64 `json:"divergence_rad"`   // λ/(π·w); null for a finite image
+	OutputRadiusMM *float64 `json:"output_radius_mm"` // w
 }

@@ -9,8 +9,8 @@ import (
 	"raytable/optics"
 )
 
-// writeText prints a report as aligned plain-text tables: system values, elements, media, rays,
-// the beam and the warnings.
+// writeText prints a report as aligned plain-text tables: system values, elements, spacing
+// tolerances, media, rays, the beam and the warnings.
 func writeText(w io.Writer, r *optics.Report) error {
 	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
 	p := func(format string, args ...any) { fmt.Fprintf(tw, format, args...) }
@@ -64,6 +64,8 @@ func writeText(w io.Writer, r *optics.Report) error {
 			fmtNum(e.HeadingInDeg), fmtNum(e.HeadingOutDeg), fmtNum(e.MarginalYMM), fmtNum(e.ChiefYMM), fmtNum(e.MaxExactYMM), opt(e.SemiDiameterMM))
 	}
 
+	writeSpacing(p, r)
+
 	if len(r.Media) > 0 {
 		p("\nMEDIA\twavelength nm\tindex\tmodel\n")
 		for _, m := range r.Media {
@@ -86,6 +88,29 @@ func writeText(w io.Writer, r *optics.Report) error {
 		p("  [%s]\t%s\t%s\n", wn.Code, wn.Element, wn.Message)
 	}
 	return tw.Flush()
+}
+
+// writeSpacing prints how tightly each gap must be held and the allowance it is measured against.
+func writeSpacing(p func(string, ...any), r *optics.Report) {
+	if len(r.Spacing) == 0 {
+		return
+	}
+	b := r.SpacingBasis
+	switch b.Kind {
+	case optics.SpacingDepthOfFocus:
+		p("\nSPACING at %s nm: depth of focus ± %s mm at %s (lambda/(2 NA'^2), NA' %s)\n", fmtNum(b.WavelengthNM), opt(b.DepthOfFocusMM), b.Reference, opt(b.ImageNA))
+		p("  id\tgap mm\timage shift per mm\tdefocus per mm\thold gap within ± mm\n")
+		for _, s := range r.Spacing {
+			p("  %s\t%s\t%s\t%s\t%s\n", s.ID, fmtNum(s.GapMM), opt(s.ImageShiftPerMM), opt(s.DefocusPerMM), opt(s.ToleranceMM))
+		}
+	case optics.SpacingDiffractionAngle:
+		p("\nSPACING at %s nm: collimated output: divergence allowed %s rad (lambda/(pi w), w %s mm)\n", fmtNum(b.WavelengthNM), opt(b.DivergenceRad), opt(b.OutputRadiusMM))
+		p("  id\tgap mm\tdivergence rad per mm\thold gap within ± mm\n")
+		for _, s := range r.Spacing {
+			p("  %s\t%s\t%s\t%s\n", s.ID, fmtNum(s.GapMM), opt(s.DivergencePerMM), opt(s.ToleranceMM))
+		}
+	}
+	p("  (- : the gap does not matter to first order)\n")
 }
 
 func writeRayCounts(p func(string, ...any), r *optics.Report) {

@@ -26,6 +26,7 @@ func Run(b *optics.Bench) (*optics.Report, error) {
 	tan := paraxial.Analyze(b, p, 0, paraxial.Tangential)
 	sag := paraxial.Analyze(b, p, 0, paraxial.Sagittal)
 	r.System = systemValues(p, tan.Values, sag.Values)
+	r.Spacing, r.SpacingBasis = SpacingTolerances(b, p, tan)
 	for k := range b.WavelengthsNM {
 		r.Chromatic = append(r.Chromatic, paraxial.Cardinals(p, k, paraxial.Tangential, &b.Source))
 	}

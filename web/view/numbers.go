@@ -68,7 +68,11 @@ func NumbersPanel(r *optics.Report) Numbers {
 	if len(r.Chromatic) > 1 {
 		n.Tables = append(n.Tables, chromaticTable(r))
 	}
-	n.Tables = append(n.Tables, elementsTable(r), rayStatusTable(r))
+	n.Tables = append(n.Tables, elementsTable(r))
+	if len(r.Spacing) > 0 {
+		n.Tables = append(n.Tables, spacingTable(r))
+	}
+	n.Tables = append(n.Tables, rayStatusTable(r))
 	if r.Beam != nil {
 		n.Tables = append(n.Tables, beamTable(r.Beam), waistTable(r.Beam))
 	}
@@ -151,6 +155,47 @@ func elementsTable(r *optics.Report) Table {
 		})
 	}
 	t.Note = "Marked rows: exact rays reach beyond the clear aperture and are cut."
+	return t
+}
+
+// spacingTable says how tightly each gap must be held, with the allowance it is measured against.
+// The tightest gaps are marked.
+func spacingTable(r *optics.Report) Table {
+	b := r.SpacingBasis
+	t := Table{Title: "Spacing tolerances at " + num(b.WavelengthNM) + " nm", TestID: "spacing"}
+	tightest := math.Inf(1)
+	for _, s := range r.Spacing {
+		if s.ToleranceMM != nil {
+			tightest = math.Min(tightest, *s.ToleranceMM)
+		}
+	}
+	marked := func(s optics.SpacingTolerance) bool {
+		return s.ToleranceMM != nil && *s.ToleranceMM <= tightest*(1+1e-9)
+	}
+	switch b.Kind {
+	case optics.SpacingDepthOfFocus:
+		t.Head = []string{"id", "gap (mm)", "image moves (mm per mm)", "defocus at " + b.Reference + " (mm per mm)", "hold the gap within ± (mm)"}
+		for _, s := range r.Spacing {
+			t.Rows = append(t.Rows, Row{Cells: []string{s.ID, num(s.GapMM), optNum(s.ImageShiftPerMM), optNum(s.DefocusPerMM), optNumOr(s.ToleranceMM, "not critical")}, Marked: marked(s)})
+		}
+		t.Note = fmt.Sprintf("Each gap changed alone, everything after it moving along. The tolerance keeps the image within the depth of focus ± %s mm at %s: λ/(2·NA'²) with image-side NA %s (Rayleigh's quarter-wave criterion). Not critical: the gap does not matter to first order. Marked: the tightest.",
+			optNum(b.DepthOfFocusMM), b.Reference, optNum(b.ImageNA))
+	case optics.SpacingDiffractionAngle:
+		t.Head = []string{"id", "gap (mm)", "output divergence (µrad per mm)", "hold the gap within ± (mm)"}
+		for _, s := range r.Spacing {
+			div := "—"
+			if s.DivergencePerMM != nil {
+				div = num(*s.DivergencePerMM * 1e6)
+			}
+			t.Rows = append(t.Rows, Row{Cells: []string{s.ID, num(s.GapMM), div, optNumOr(s.ToleranceMM, "not critical")}, Marked: marked(s)})
+		}
+		div := "—"
+		if b.DivergenceRad != nil {
+			div = num(*b.DivergenceRad * 1e6)
+		}
+		t.Note = fmt.Sprintf("The output is collimated. Each gap changed alone, everything after it moving along. The tolerance keeps the output divergence within the beam's own diffraction angle, %s µrad = λ/(π·w) for an output radius w of %s mm. Not critical: the gap does not matter to first order. Marked: the tightest.",
+			div, optNum(b.OutputRadiusMM))
+	}
 	return t
 }
 

@@ -1,0 +1,165 @@
+package analysis
+
+import (
+	"math"
+	"slices"
+
+	"raytable/optics"
+	"raytable/optics/paraxial"
+)
+
+// SpacingStepMM is δ, the change of one gap in the central difference (f(g+δ) - f(g-δ))/(2δ).
+// Its truncation error is δ²/6 of the third derivative, about 1e-9 relative for the focal lengths
+// and conjugates of a bench; its rounding error about ε·|z|/δ, 1e-11 for positions of a metre.
+const SpacingStepMM = 0.01
+
+// noiseRel is how small a difference of two computed values must be, relative to the values
+// themselves, to count as rounding: far above ε (about 1e-16 per operation, accumulated over a few
+// hundred surfaces) and far below any real change over ±δ.
+const noiseRel = 1e-12
+
+// SpacingTolerances computes, for every element up to the one the image is looked at, how a
+// change of its gap alone moves the image or spoils the collimation, and the gap error the
+// allowance permits (see optics.SpacingTolerance and optics.SpacingBasis for the definitions).
+//
+// p must be optics.BuildPath(b) and tan paraxial.Analyze(b, p, 0, paraxial.Tangential). Each gap
+// is changed by ±SpacingStepMM on a copy of the bench (b is not changed) whose path is rebuilt
+// and recomputed: two recomputations per element. Elements after the first dump receive no light
+// and get no row.
+func SpacingTolerances(b *optics.Bench, p *optics.Path, tan paraxial.Result) ([]optics.SpacingTolerance, optics.SpacingBasis) {
+	rows := []optics.SpacingTolerance{}
+	basis := optics.SpacingBasis{Kind: optics.SpacingNone}
+	if len(b.WavelengthsNM) > 0 {
+		basis.WavelengthNM = b.WavelengthsNM[0]
+	}
+	_, last, ok := p.OpticalRange()
+	if !ok || len(b.Elements) == 0 || len(b.WavelengthsNM) == 0 {
+		return rows, basis
+	}
+	ref := referenceElement(b)
+	basis.Reference = b.Elements[ref].ID
+	lambdaMM := b.WavelengthsNM[0] * 1e-6
+
+	s := spacingProbe{src: &b.Source, ref: ref, last: last, start: tan.MarginalStart}
+	s.focus = tan.Values.ImageDistanceMM != nil
+	var allowance float64 // depth of focus (mm) or diffraction angle (rad); 0 when there is none
+	if s.focus {
+		basis.Kind = optics.SpacingDepthOfFocus
+		if na := tan.Values.ImageNA; na != nil {
+			basis.ImageNA = ptr(*na)
+			if *na > 0 {
+				allowance = lambdaMM / (2 * *na * *na)
+				basis.DepthOfFocusMM = ptr(allowance)
+			}
+		}
+	} else {
+		basis.Kind = optics.SpacingDiffractionAngle
+		w := math.Abs(tan.Marginal[last].Y)
+		basis.OutputRadiusMM = ptr(w)
+		if w > 0 {
+			allowance = lambdaMM / (math.Pi * w)
+			basis.DivergenceRad = ptr(allowance)
+		}
+		s.slopeScale = slopeTermBound(p, tan.Marginal)
+	}
+
+	work := *b
+	work.Elements = slices.Clone(b.Elements)
+	s.trace = make([]paraxial.Ray, len(p.Surfaces))
+	for i := 0; i <= ref; i++ {
+		gap := b.Elements[i].GapMM
+		work.Elements[i].GapMM = gap + SpacingStepMM
+		plus := s.measure(&work)
+		work.Elements[i].GapMM = gap - SpacingStepMM
+		minus := s.measure(&work)
+		work.Elements[i].GapMM = gap
+
+		row := optics.SpacingTolerance{ID: b.Elements[i].ID, GapMM: gap}
+		var sensitivity float64
+		switch {
+		case s.focus && plus.imaged && minus.imaged:
+			shift := centralDifference(plus.zImage, minus.zImage, math.Max(math.Abs(plus.zImage), math.Abs(minus.zImage)))
+			scale := math.Max(math.Max(math.Abs(plus.zImage), math.Abs(minus.zImage)), math.Max(math.Abs(plus.zRef), math.Abs(minus.zRef)))
+			sensitivity = centralDifference(plus.zImage-plus.zRef, minus.zImage-minus.zRef, scale)
+			row.ImageShiftPerMM = ptr(shift)
+			row.DefocusPerMM = ptr(sensitivity)
+		case !s.focus:
+			sensitivity = centralDifference(plus.slope, minus.slope, s.slopeScale)
+			row.DivergencePerMM = ptr(sensitivity)
+		}
+		if sensitivity != 0 && allowance > 0 {
+			if tol := allowance / math.Abs(sensitivity); tol <= optics.MaxLengthMM {
+				row.ToleranceMM = ptr(tol)
+			}
+		}
+		rows = append(rows, row)
+	}
+	return rows, basis
+}
+
+// referenceElement is the element the output is looked at: the first dump, where the beam ends,
+// or else the bench's last element.
+func referenceElement(b *optics.Bench) int {
+	for i := range b.Elements {
+		if b.Elements[i].Type == optics.TypeDump {
+			return i
+		}
+	}
+	return len(b.Elements) - 1
+}
+
+// spacingProbe recomputes the quantities the tolerances are made of on a changed bench.
+type spacingProbe struct {
+	src        *optics.Source
+	focus      bool // a finite image: measure its position; otherwise the output slope
+	ref, last  int  // reference element; last optical surface (the same on every changed path)
+	start      paraxial.Ray
+	slopeScale float64
+	trace      []paraxial.Ray // reused by every trace
+}
+
+// spacingSample is what one changed bench gives.
+type spacingSample struct {
+	imaged bool    // the image is at a finite distance
+	zImage float64 // image position along the path
+	zRef   float64 // reference element's position along the path
+	slope  float64 // output marginal ray slope dy/dz
+}
+
+func (s *spacingProbe) measure(b *optics.Bench) spacingSample {
+	p := optics.BuildPath(b)
+	out := spacingSample{zRef: p.Surfaces[p.Spans[s.ref].First].PathMM}
+	if s.focus {
+		c := paraxial.Cardinals(p, 0, paraxial.Tangential, s.src)
+		if c.ImageDistanceMM != nil {
+			out.imaged = true
+			out.zImage = p.Surfaces[s.last].PathMM + *c.ImageDistanceMM
+		}
+		return out
+	}
+	s.trace = paraxial.TraceInto(s.trace, p, 0, paraxial.Tangential, s.start)
+	out.slope = s.trace[s.last].NU / p.Surfaces[s.last].Index[0]
+	return out
+}
+
+// centralDifference is (plus - minus)/(2δ), or 0 when the difference is rounding noise for values
+// of the given size.
+func centralDifference(plus, minus, scale float64) float64 {
+	d := plus - minus
+	if math.Abs(d) <= noiseRel*scale {
+		return 0
+	}
+	return d / (2 * SpacingStepMM)
+}
+
+// slopeTermBound bounds the terms summed into the output slope of the marginal ray: Σ|P·y| over
+// the surfaces it crosses (the running error bound of a sum; Higham, Accuracy and Stability of
+// Numerical Algorithms, 2nd ed. 2002, sec. 4.2), the size against which a change of that slope is
+// told from rounding.
+func slopeTermBound(p *optics.Path, marginal []paraxial.Ray) float64 {
+	var sum float64
+	for i := range p.Surfaces {
+		sum += math.Abs(paraxial.Power(&p.Surfaces[i], p.IndexBefore(i, 0), p.Surfaces[i].Index[0], paraxial.Tangential) * marginal[i].Y)
+	}
+	return sum
+}
