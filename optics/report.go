@@ -16,6 +16,7 @@ type Report struct {
 	Elements      []ElementPlace `json:"elements"`
 	Rays          []Ray          `json:"rays"`
 	Beam          *BeamReport    `json:"beam,omitempty"`
+	Blur          []Blur         `json:"blur"` // exact ray spread at each screen, per fan
 	Holes         HoleGrid       `json:"holes"`
 	Placement     []Placement    `json:"placement,omitempty"`
 	Warnings      []Warning      `json:"warnings"`
@@ -280,4 +281,18 @@ type SpacingBasis struct {
 	ImageNA        *float64 `json:"image_na"`
 	DivergenceRad  *float64 `json:"divergence_rad"`   // λ/(π·w); null for a finite image
 	OutputRadiusMM *float64 `json:"output_radius_mm"` // w
+}
+
+// Blur is how widely one fan of exact rays lands on a screen: the RMS distance of the hits from
+// their centroid and the largest distance, in the table plane, with the Airy radius of a perfect
+// image beside them (null when the system forms no finite image).
+type Blur struct {
+	Element      string   `json:"element"`
+	Field        string   `json:"field"`
+	WavelengthNM float64  `json:"wavelength_nm"`
+	Rays         int      `json:"rays"`   // rays of the fan that reached the screen
+	Traced       int      `json:"traced"` // rays in the fan
+	RMSMM        float64  `json:"rms_mm"`
+	PeakMM       float64  `json:"peak_mm"`
+	AiryRadiusMM *float64 `json:"airy_radius_mm"`
 }

@@ -48,6 +48,7 @@ func Run(b *optics.Bench) (*optics.Report, error) {
 	r.Placement, planWarnings = layout.Plan(b, r.Elements, beamRadius(r, b))
 	r.Warnings = append(r.Warnings, planWarnings...)
 	r.Warnings = append(r.Warnings, screenWarnings(b, r)...)
+	r.Blur = blurs(b, r)
 	return r, nil
 }
 
