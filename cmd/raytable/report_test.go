@@ -23,7 +23,7 @@ func TestReportText(t *testing.T) {
 	if code != exitOK {
 		t.Fatalf("exit %d, stderr:\n%s", code, errOut)
 	}
-	for _, want := range []string{"SYSTEM at 632.8 nm", "EFL mm", "ELEMENTS", "L1", "CAM", "RAYS", "BEAM", "WAISTS", "WARNINGS"} {
+	for _, want := range []string{"SYSTEM at 632.8 nm", "EFL mm", "ELEMENTS", "L1", "CAM", "RAYS", "BEAM", "WAISTS", "SPACING", "WARNINGS"} {
 		if !strings.Contains(out, want) {
 			t.Errorf("text report lacks %q", want)
 		}
@@ -44,7 +44,8 @@ func TestReportJSONNames(t *testing.T) {
 	if r["format"] != "raytable/report/v1" {
 		t.Errorf("format = %v", r["format"])
 	}
-	requireKeys(t, "report", r, "format", "wavelengths_nm", "media", "system", "elements", "rays", "warnings", "beam", "placement")
+	requireKeys(t, "report", r, "format", "wavelengths_nm", "media", "system", "elements", "rays", "warnings", "beam", "placement",
+		"spacing", "spacing_basis", "blur", "holes")
 	sys := r["system"].(map[string]any)
 	planeKeys := []string{"efl_mm", "bfl_mm", "ffl_mm", "front_principal_mm", "rear_principal_mm", "abcd", "afocal",
 		"image_distance_mm", "magnification", "aperture_stop", "f_number", "image_na"}

@@ -23,8 +23,9 @@ const noiseRel = 1e-12
 // allowance permits (see optics.SpacingTolerance and optics.SpacingBasis for the definitions).
 //
 // p must be optics.BuildPath(b) and tan paraxial.Analyze(b, p, 0, paraxial.Tangential). Each gap
-// is changed by ±SpacingStepMM on a copy of the bench (b is not changed) whose path is rebuilt
-// and recomputed: two recomputations per element. Elements after the first dump receive no light
+// is changed by ±SpacingStepMM in one reused copy of the path (b and p are not changed): a gap
+// change only moves every surface from that element on along the path, so the copy's positions
+// are shifted instead of rebuilding the path, and then recomputed: two recomputations per element. Elements after the first dump receive no light
 // and get no row.
 func SpacingTolerances(b *optics.Bench, p *optics.Path, tan paraxial.Result) ([]optics.SpacingTolerance, optics.SpacingBasis) {
 	rows := []optics.SpacingTolerance{}
@@ -63,16 +64,23 @@ func SpacingTolerances(b *optics.Bench, p *optics.Path, tan paraxial.Result) ([]
 		s.slopeScale = slopeTermBound(p, tan.Marginal)
 	}
 
-	work := *b
-	work.Elements = slices.Clone(b.Elements)
+	work := *p
+	work.Surfaces = slices.Clone(p.Surfaces)
+	shift := func(from int, d float64) {
+		for j := range work.Surfaces {
+			work.Surfaces[j].PathMM = p.Surfaces[j].PathMM
+			if j >= from {
+				work.Surfaces[j].PathMM += d
+			}
+		}
+	}
 	s.trace = make([]paraxial.Ray, len(p.Surfaces))
 	for i := 0; i <= ref; i++ {
 		gap := b.Elements[i].GapMM
-		work.Elements[i].GapMM = gap + SpacingStepMM
+		shift(p.Spans[i].First, SpacingStepMM)
 		plus := s.measure(&work)
-		work.Elements[i].GapMM = gap - SpacingStepMM
+		shift(p.Spans[i].First, -SpacingStepMM)
 		minus := s.measure(&work)
-		work.Elements[i].GapMM = gap
 
 		row := optics.SpacingTolerance{ID: b.Elements[i].ID, GapMM: gap}
 		var sensitivity float64
@@ -126,8 +134,7 @@ type spacingSample struct {
 	slope  float64 // output marginal ray slope dy/dz
 }
 
-func (s *spacingProbe) measure(b *optics.Bench) spacingSample {
-	p := optics.BuildPath(b)
+func (s *spacingProbe) measure(p *optics.Path) spacingSample {
 	out := spacingSample{zRef: p.Surfaces[p.Spans[s.ref].First].PathMM}
 	if s.focus {
 		c := paraxial.Cardinals(p, 0, paraxial.Tangential, s.src)
