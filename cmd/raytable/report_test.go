@@ -23,7 +23,7 @@ func TestReportText(t *testing.T) {
 	if code != exitOK {
 		t.Fatalf("exit %d, stderr:\n%s", code, errOut)
 	}
-	for _, want := range []string{"SYSTEM at 632.8 nm", "EFL mm", "ELEMENTS", "L1", "CAM", "RAYS", "BEAM", "WAISTS", "SPACING", "WARNINGS"} {
+	for _, want := range []string{"SYSTEM at 632.8 nm", "EFL mm", "ELEMENTS", "L1", "CAM", "RAYS", "BLUR AT SCREENS", "BEAM", "WAISTS", "SPACING", "WARNINGS"} {
 		if !strings.Contains(out, want) {
 			t.Errorf("text report lacks %q", want)
 		}

@@ -78,6 +78,7 @@ func writeText(w io.Writer, r *optics.Report) error {
 	}
 
 	writeRayCounts(p, r)
+	writeBlur(p, r)
 	writeBeam(p, r.Beam)
 
 	p("\nWARNINGS\n")
@@ -111,6 +112,21 @@ func writeSpacing(p func(string, ...any), r *optics.Report) {
 		}
 	}
 	p("  (- : the gap does not matter to first order)\n")
+}
+
+func writeBlur(p func(string, ...any), r *optics.Report) {
+	if len(r.Blur) == 0 {
+		return
+	}
+	p("\nBLUR AT SCREENS\tfield\twavelength nm\trays\tRMS um\tlargest um\tAiry radius um\n")
+	um := func(v float64) string { return fmtNum(v * 1000) }
+	for _, b := range r.Blur {
+		airy := "-"
+		if b.AiryRadiusMM != nil {
+			airy = um(*b.AiryRadiusMM)
+		}
+		p("  %s\t%s\t%s\t%d of %d\t%s\t%s\t%s\n", b.Element, b.Field, fmtNum(b.WavelengthNM), b.Rays, b.Traced, um(b.RMSMM), um(b.PeakMM), airy)
+	}
 }
 
 func writeRayCounts(p func(string, ...any), r *optics.Report) {

@@ -73,6 +73,9 @@ func NumbersPanel(r *optics.Report) Numbers {
 		n.Tables = append(n.Tables, spacingTable(r))
 	}
 	n.Tables = append(n.Tables, rayStatusTable(r))
+	if len(r.Blur) > 0 {
+		n.Tables = append(n.Tables, blurTable(r.Blur))
+	}
 	if r.Beam != nil {
 		n.Tables = append(n.Tables, beamTable(r.Beam), waistTable(r.Beam))
 	}
@@ -196,6 +199,26 @@ func spacingTable(r *optics.Report) Table {
 		t.Note = fmt.Sprintf("The output is collimated. Each gap changed alone, everything after it moving along. The tolerance keeps the output divergence within the beam's own diffraction angle, %s µrad = λ/(π·w) for an output radius w of %s mm. Not critical: the gap does not matter to first order. Marked: the tightest.",
 			div, optNum(b.OutputRadiusMM))
 	}
+	return t
+}
+
+// blurTable shows how widely each fan lands on each screen beside the Airy radius; rows where
+// the rays spread wider than a perfect image are marked.
+func blurTable(bs []optics.Blur) Table {
+	t := Table{Title: "Image blur at the screens", TestID: "blur",
+		Head: []string{"screen", "field", "wavelength (nm)", "rays arriving", "RMS (µm)", "largest (µm)", "Airy radius (µm)"}}
+	um := func(v float64) string { return num(v * 1000) }
+	for _, b := range bs {
+		airy := "—"
+		if b.AiryRadiusMM != nil {
+			airy = um(*b.AiryRadiusMM)
+		}
+		t.Rows = append(t.Rows, Row{
+			Cells:  []string{b.Element, b.Field, num(b.WavelengthNM), fmt.Sprintf("%d of %d", b.Rays, b.Traced), um(b.RMSMM), um(b.PeakMM), airy},
+			Marked: b.Rays > 0 && b.AiryRadiusMM != nil && b.RMSMM > *b.AiryRadiusMM,
+		})
+	}
+	t.Note = "Spread of each exact fan about its centre in the table plane. Airy radius 1.22·λ/(2·NA') of a perfect image. Marked: wider than the Airy radius."
 	return t
 }
 

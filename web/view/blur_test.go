@@ -1,0 +1,62 @@
+package view
+
+import (
+	"bytes"
+	"context"
+	"strings"
+	"testing"
+
+	"golang.org/x/net/html"
+
+	"raytable/optics"
+)
+
+// TestBlurTable lays out blur rows: values in micrometres, arriving rays as "n of m", a row wider
+// than its Airy radius marked, and a row with no finite image showing a dash for the Airy radius.
+func TestBlurTable(t *testing.T) {
+	airy := 0.016
+	r := &optics.Report{Blur: []optics.Blur{
+		{Element: "CAM", Field: "0 deg", WavelengthNM: 632.8, Rays: 21, Traced: 21, RMSMM: 0.0092, PeakMM: 0.0223, AiryRadiusMM: &airy},
+		{Element: "CAM", Field: "0 deg", WavelengthNM: 532, Rays: 18, Traced: 21, RMSMM: 0.0657, PeakMM: 0.1177, AiryRadiusMM: &airy},
+		{Element: "CARD", Field: "1 mm", WavelengthNM: 532, Rays: 21, Traced: 21, RMSMM: 0.5, PeakMM: 0.9},
+	}}
+	var buf bytes.Buffer
+	if err := ResultFragment(Result{Numbers: NumbersPanel(r)}).Render(context.Background(), &buf); err != nil {
+		t.Fatal(err)
+	}
+	var table *html.Node
+	walk(parse(t, buf.String()), func(n *html.Node) {
+		if v, _ := attrOf(n, "data-testid"); v == "blur" {
+			table = n
+		}
+	})
+	if table == nil {
+		t.Fatal("no blur table in the numbers panel")
+	}
+	var rows []string
+	var marked []bool
+	walk(table, func(n *html.Node) {
+		if n.Type == html.ElementNode && n.Data == "tr" && n.Parent != nil && n.Parent.Data == "tbody" {
+			var cells []string
+			for c := n.FirstChild; c != nil; c = c.NextSibling {
+				if c.Type == html.ElementNode && c.Data == "td" {
+					cells = append(cells, textOf(c))
+				}
+			}
+			rows = append(rows, strings.Join(cells, "|"))
+			cls, _ := attrOf(n, "class")
+			marked = append(marked, strings.Contains(cls, "marked"))
+		}
+	})
+	want := []string{
+		"CAM|0 deg|632.8|21 of 21|9.2|22.3|16",
+		"CAM|0 deg|532|18 of 21|65.7|117.7|16",
+		"CARD|1 mm|532|21 of 21|500|900|—",
+	}
+	if strings.Join(rows, "\n") != strings.Join(want, "\n") {
+		t.Errorf("rows\n%s\nwant\n%s", strings.Join(rows, "\n"), strings.Join(want, "\n"))
+	}
+	if len(marked) != 3 || marked[0] || !marked[1] || marked[2] {
+		t.Errorf("marked %v, want only the 532 nm row at CAM", marked)
+	}
+}
