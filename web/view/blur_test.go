@@ -60,3 +60,30 @@ func TestBlurTable(t *testing.T) {
 		t.Errorf("marked %v, want only the 532 nm row at CAM", marked)
 	}
 }
+
+// TestCompareRowsBlurAndSpacing: the compare page pairs the blur and the gap tolerances of two
+// designs and marks the ones that changed.
+func TestCompareRowsBlurAndSpacing(t *testing.T) {
+	tol := func(v float64) *float64 { return &v }
+	a := &optics.Report{
+		Blur:    []optics.Blur{{Element: "CAM", Field: "0 deg", WavelengthNM: 632.8, RMSMM: 0.010}},
+		Spacing: []optics.SpacingTolerance{{ID: "L2", ToleranceMM: tol(0.2)}},
+	}
+	b := &optics.Report{
+		Blur:    []optics.Blur{{Element: "CAM", Field: "0 deg", WavelengthNM: 632.8, RMSMM: 0.004}},
+		Spacing: []optics.SpacingTolerance{{ID: "L2", ToleranceMM: tol(0.2)}},
+	}
+	rows, _ := CompareRows(a, b)
+	got := map[string]CompareRow{}
+	for _, r := range rows {
+		got[r.Label] = r
+	}
+	blur, ok := got["blur at CAM, 0 deg, 632.8 nm RMS (µm)"]
+	if !ok || blur.A != "10" || blur.B != "4" || !blur.Changed {
+		t.Errorf("blur row %+v (found %v), want 10 -> 4 marked", blur, ok)
+	}
+	gap, ok := got["L2 gap tolerance ± (mm)"]
+	if !ok || gap.A != "0.2" || gap.Changed {
+		t.Errorf("tolerance row %+v (found %v), want 0.2 unchanged", gap, ok)
+	}
+}

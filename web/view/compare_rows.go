@@ -58,6 +58,13 @@ func reportItems(r *optics.Report) []item {
 	for _, s := range []string{optics.RayOK, optics.RayClipped, optics.RayTIR, optics.RayMissed} {
 		addNum("rays "+statusWords[s], ptr(counts[s]))
 	}
+	for _, b := range r.Blur {
+		k := fmt.Sprintf("blur at %s, %s, %s nm ", b.Element, b.Field, num(b.WavelengthNM))
+		addNum(k+"RMS (µm)", ptr(b.RMSMM*1000))
+	}
+	for _, sp := range r.Spacing {
+		addNum(sp.ID+" gap tolerance ± (mm)", sp.ToleranceMM)
+	}
 	if r.Beam != nil {
 		for _, e := range r.Beam.Elements {
 			addNum(e.ID+" beam radius in plane (mm)", ptr(e.WTMM))
