@@ -46,6 +46,9 @@ func Trace(p *optics.Path, k int, s Start, buf []Point) Result {
 	}
 	pos, dir := s.Pos, Scale(1/dn, s.Dir)
 	prevZ := 0.0
+	// side is +1 while the frame's +y lies left of travel and -1 after an odd number of mirrors,
+	// when it lies to the right: a counter-clockwise turn then tilts the mirror towards -y.
+	side := 1.0
 	for i := range p.Surfaces {
 		sf := &p.Surfaces[i]
 		p0 := Vec{pos.X, pos.Y, pos.Z - (sf.PathMM - prevZ)}
@@ -55,7 +58,8 @@ func Trace(p *optics.Path, k int, s Start, buf []Point) Result {
 		}
 		switch sf.Kind {
 		case optics.Reflecting:
-			n0 := mirrorNormal(sf.TurnRad)
+			n0 := mirrorNormal(side * sf.TurnRad)
+			side = -side
 			hit, miss := intersect(p0, dir, n0, sf.Curvature)
 			if miss != hitOK {
 				return stop(optics.RayMissed, missReason(sf, miss))

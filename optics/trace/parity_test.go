@@ -1,0 +1,42 @@
+package trace
+
+import (
+	"fmt"
+	"testing"
+)
+
+// After an odd number of mirrors the unfolded frame's +y points to the right of travel (each
+// mirror reflects all three axes; issue 2, "Frames"). A mirror that turns the beam
+// counter-clockwise therefore tilts towards -y of that frame. Check it against the same mirror met
+// first: a flat fold changes nothing physical about how the next mirror meets the beam, so the
+// hit on a tilted concave mirror behind a fold must be the hit on that mirror alone of the ray
+// that lies on the same physical side, with y (left of travel) negated on the way in and out
+// (geometry of the unfolding; a left-handed frame is a y-reflection of a right-handed one).
+func TestMirrorTurnAfterOddFold(t *testing.T) {
+	const r = 150.0
+	rays := []Start{
+		parallel(0, 4), parallel(3, -5), parallel(-2, 6),
+		{Pos: Vec{1, 2, 0}, Dir: Unit(Vec{0.03, -0.05, 1})},
+		{Pos: Vec{-3, -1, 0}, Dir: Unit(Vec{-0.02, 0.04, 1})},
+	}
+	flipY := func(v Vec) Vec { return Vec{v.X, -v.Y, v.Z} }
+	for _, fold := range []float64{90, -90, 60} {
+		for _, turn := range []float64{60, -60, 120, -150} {
+			folded := path(mirror(40, 0, fold), mirror(100, r, turn))
+			alone := path(mirror(100, r, turn))
+			for i, s := range rays {
+				t.Run(fmt.Sprintf("fold %g turn %g ray %d", fold, turn, i), func(t *testing.T) {
+					got := mustTrace(t, folded, s).Points[1]
+					want := mustTrace(t, alone, Start{Pos: flipY(s.Pos), Dir: flipY(s.Dir)}).Points[0]
+					want.Pos, want.Dir = flipY(want.Pos), flipY(want.Dir)
+					if d := Norm(Sub(got.Pos, want.Pos)); d > 1e-10 {
+						t.Errorf("hit %+v behind the fold, want %+v", got.Pos, want.Pos)
+					}
+					if d := Norm(Sub(got.Dir, want.Dir)); d > roundOff {
+						t.Errorf("dir %+v behind the fold, want %+v", got.Dir, want.Dir)
+					}
+				})
+			}
+		}
+	}
+}
