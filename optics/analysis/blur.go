@@ -15,7 +15,7 @@ func blurs(b *optics.Bench, r *optics.Report) []optics.Blur {
 	if na := r.System.ImageNA; na != nil && *na > 0 && !r.System.Afocal {
 		airyNA = *na
 	}
-	var out []optics.Blur
+	out := []optics.Blur{} // [] in JSON, not null, when the bench has no screen
 	for _, e := range b.Elements {
 		if e.Type != optics.TypeScreen {
 			continue

@@ -1,8 +1,10 @@
 package analysis
 
 import (
+	"encoding/json"
 	"fmt"
 	"math"
+	"strings"
 	"testing"
 
 	"raytable/optics"
@@ -65,5 +67,22 @@ func TestBlurSphericalAberration(t *testing.T) {
 		t.Errorf("flat-first / curved-first blur = %.3f (%.4g / %.4g mm), want about 4", ratio, bad, good)
 	} else {
 		t.Logf("flat-first / curved-first blur = %.3f (%.4g / %.4g mm)", ratio, bad, good)
+	}
+}
+
+// The report's blur is a list (README, "Report": one row per fan at every screen); a bench with
+// no screen has an empty list, which JSON must show as [] rather than null, as the report does
+// for every other list.
+func TestBlurWithoutScreenIsEmptyList(t *testing.T) {
+	r := mustRun(t, `{"format":"raytable/bench/v1","wavelengths_nm":[632.8],
+ "table":{"grid":"none","width_mm":600,"depth_mm":300,"beam_height_mm":75},
+ "source":{"x_mm":0,"y_mm":150,"heading_deg":0,"kind":"collimated","semi_diameter_mm":5},
+ "elements":[{"id":"F","type":"thin-lens","gap_mm":20,"focal_mm":100},{"id":"D","type":"dump","gap_mm":100}]}`)
+	data, err := json.Marshal(r)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !strings.Contains(string(data), `"blur":[]`) {
+		t.Errorf("report without a screen: want \"blur\":[], got blur %v", r.Blur)
 	}
 }
