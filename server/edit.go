@@ -2,6 +2,7 @@ package server
 
 import (
 	"bytes"
+	"mime"
 	"net/http"
 	"net/url"
 	"strings"
@@ -14,13 +15,22 @@ import (
 // multipartMemory is how much of a multipart form is kept in memory; the body cap is the same.
 const multipartMemory = maxBodyBytes
 
-// postedForm parses a posted form, urlencoded or multipart, within the body cap.
+// postedForm parses a posted form, urlencoded or multipart, within the body cap. Any other body
+// type is refused (415): Go would silently ignore it, and the edit would then read as a form
+// with every field missing.
 func postedForm(r *http.Request) (url.Values, error) {
-	var err error
-	if strings.HasPrefix(r.Header.Get("Content-Type"), "multipart/form-data") {
+	ct := r.Header.Get("Content-Type")
+	mt, _, err := mime.ParseMediaType(ct)
+	switch {
+	case err == nil && mt == "multipart/form-data":
 		err = r.ParseMultipartForm(multipartMemory)
-	} else {
+	case err == nil && mt == "application/x-www-form-urlencoded":
 		err = r.ParseForm()
+	default:
+		if ct == "" {
+			ct = "none"
+		}
+		return nil, optics.Errorf(eUnsupported, "send the form as application/x-www-form-urlencoded or multipart/form-data (Content-Type was %s)", ct)
 	}
 	if err != nil {
 		return nil, bodyError(err)

@@ -9,13 +9,21 @@ import (
 	"raytable/web/view"
 )
 
-// statusByCode is the one table from optics error codes to HTTP statuses. A bad import body is
-// the exception: it answers 400 (see badBody), since the request itself is what is wrong.
+// Codes of the server's own errors, about the HTTP request rather than the bench in it.
+const (
+	eBadRequest  = "bad_request" // the body cannot be read as what it claims to be
+	eUnsupported = "unsupported" // the body is of a type the route does not take
+)
+
+// statusByCode is the one table from error codes to HTTP statuses. A bad import body is the
+// exception: it answers 400 (see importBench), since the request itself is what is wrong.
 var statusByCode = map[string]int{
 	optics.EInvalid:  http.StatusUnprocessableEntity,
 	optics.ENotFound: http.StatusNotFound,
 	optics.ETooLarge: http.StatusRequestEntityTooLarge,
 	optics.EInternal: http.StatusInternalServerError,
+	eBadRequest:      http.StatusBadRequest,
+	eUnsupported:     http.StatusUnsupportedMediaType,
 }
 
 // statusOf maps an error to its status; anything not an *optics.Error is internal.
@@ -32,6 +40,7 @@ var titles = map[int]string{
 	http.StatusNotFound:              "No such page or design",
 	http.StatusMethodNotAllowed:      "That page does not take this kind of request",
 	http.StatusRequestEntityTooLarge: "That is too large",
+	http.StatusUnsupportedMediaType:  "That kind of request body is not accepted here",
 	http.StatusUnprocessableEntity:   "The bench breaks a rule",
 	http.StatusInternalServerError:   "Something went wrong on our side",
 }
@@ -64,7 +73,7 @@ func bodyError(err error) error {
 	if errors.As(err, &mb) || strings.Contains(err.Error(), "request body too large") {
 		return optics.Errorf(optics.ETooLarge, "the request is larger than %d bytes (1 MiB), the most raytable accepts", maxBodyBytes)
 	}
-	return optics.Errorf(optics.EInvalid, "the request body could not be read: %v", err)
+	return optics.Errorf(eBadRequest, "the request body could not be read: %v", err)
 }
 
 func asOptics(err error, target **optics.Error) bool { return errors.As(err, target) }

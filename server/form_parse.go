@@ -28,7 +28,20 @@ func (f *formReader) add(path, format string, args ...any) {
 
 func (f *formReader) has(path string) bool { _, ok := f.vals[path]; return ok }
 
-func (f *formReader) text(path string) string { return strings.TrimSpace(f.vals.Get(path)) }
+// get returns a field's text. A field sent more than once is a problem rather than a silent pick
+// of one copy: a browser never does that, so the form is not the one the page drew.
+func (f *formReader) get(path string) string {
+	vs := f.vals[path]
+	if len(vs) > 1 && !f.problemAt(path) {
+		f.add(path, "was sent %d times; send each field once (reload the page and try again)", len(vs))
+	}
+	if len(vs) == 0 {
+		return ""
+	}
+	return vs[0]
+}
+
+func (f *formReader) text(path string) string { return strings.TrimSpace(f.get(path)) }
 
 // num reads a required number.
 func (f *formReader) num(path string, q quantity) float64 {
@@ -72,7 +85,7 @@ func splitList(s string) []string {
 
 // list reads a comma list of numbers; the problem of item i is at path[i].
 func (f *formReader) list(path string, q quantity) []float64 {
-	items := splitList(f.vals.Get(path))
+	items := splitList(f.get(path))
 	if items == nil {
 		return nil
 	}
@@ -89,7 +102,7 @@ func (f *formReader) list(path string, q quantity) []float64 {
 
 // faces reads lens face radii: a length, or "flat" or nothing for a flat face.
 func (f *formReader) faces(path string) []*float64 {
-	raw := f.vals.Get(path)
+	raw := f.get(path)
 	if strings.TrimSpace(raw) == "" {
 		return nil
 	}
@@ -140,7 +153,7 @@ func parseBenchForm(vals url.Values) (*optics.Bench, []optics.Problem) {
 	b := &optics.Bench{
 		Format:        optics.FormatBenchV1,
 		Title:         f.text("title"),
-		Notes:         strings.TrimSpace(strings.ReplaceAll(vals.Get("notes"), "\r\n", "\n")),
+		Notes:         strings.TrimSpace(strings.ReplaceAll(f.get("notes"), "\r\n", "\n")),
 		WavelengthsNM: f.list("wavelengths_nm", wavelength),
 	}
 	b.Table = optics.Table{
@@ -253,7 +266,7 @@ func (f *formReader) element(i int) optics.Element {
 	case optics.TypeLens:
 		e.FacesMM = f.faces(p + "faces_mm")
 		e.ThicknessesMM = f.list(p+"thicknesses_mm", length)
-		e.Materials = splitList(f.vals.Get(p + "materials"))
+		e.Materials = splitList(f.get(p + "materials"))
 		e.DiameterMM = f.optNum(p+"diameter_mm", length)
 	case optics.TypeThinLens:
 		e.FocalMM = f.optNum(p+"focal_mm", length)

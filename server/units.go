@@ -35,6 +35,8 @@ var (
 const maxMagnitude = 1e12
 
 // parse reads one value with an optional unit, e.g. "25.4", "1 in", `1"`, "2.5cm", "500 µm".
+// A decimal comma ("1,5") and fractions ("1/2 in") are refused with a message saying how to write
+// the number instead: commas separate the items of list fields, so "1,5" could mean two values.
 func (q quantity) parse(text string) (float64, error) {
 	s := strings.TrimSpace(text)
 	num, unit := splitUnit(s)
@@ -43,6 +45,12 @@ func (q quantity) parse(text string) (float64, error) {
 		factor, ok = q.units[unit]
 	}
 	if num == "" || !ok {
+		switch {
+		case num != "" && strings.HasPrefix(unit, ","):
+			return 0, fmt.Errorf("%q is not %s; write decimals with a point, e.g. 1.5", text, q.noun)
+		case num != "" && strings.HasPrefix(unit, "/"):
+			return 0, fmt.Errorf("%q is not %s; fractions are not read, write a decimal such as 0.5 in", text, q.noun)
+		}
 		return 0, fmt.Errorf("%q is not %s; %s", text, q.noun, q.hint)
 	}
 	v, err := strconv.ParseFloat(num, 64)
@@ -55,6 +63,9 @@ func (q quantity) parse(text string) (float64, error) {
 	v *= factor
 	if math.Abs(v) > maxMagnitude {
 		return 0, fmt.Errorf("%q is too large to be %s", text, q.noun)
+	}
+	if v == 0 {
+		v = 0 // "-0" is stored as 0, not as a negative zero that the history would show as "-0"
 	}
 	return v, nil
 }

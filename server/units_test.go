@@ -31,6 +31,9 @@ func TestQuantityParse(t *testing.T) {
 		{length, "1e3", 1000},
 		{length, "1.5E-2 mm", 0.015},
 		{length, "3 MM", 3},
+		{length, " 3 mm ", 3},
+		{length, "-0", 0},
+		{length, "-0 in", 0},
 		// Wavelengths in nm, or micrometres.
 		{wavelength, "632.8", 632.8},
 		{wavelength, "632.8 nm", 632.8},
@@ -46,6 +49,9 @@ func TestQuantityParse(t *testing.T) {
 		if err != nil {
 			t.Errorf("%s %q: %v", tc.q.noun, tc.in, err)
 			continue
+		}
+		if math.Signbit(got) != math.Signbit(tc.want) {
+			t.Errorf("%s %q = %v, want the sign of %v (no negative zero is stored)", tc.q.noun, tc.in, got, tc.want)
 		}
 		if math.Abs(got-tc.want) > unitTolerance*math.Max(1, math.Abs(tc.want)) {
 			t.Errorf("%s %q = %v, want %v", tc.q.noun, tc.in, got, tc.want)
@@ -73,6 +79,11 @@ func TestQuantityParseRejects(t *testing.T) {
 		{wavelength, "632.8 mm", "is not a wavelength"},
 		{angle, "1 rad", "is not an angle"},
 		{plain, "0.1 mm", "is not a number"},
+		// A decimal comma and fractions are refused, each with a message saying what to write.
+		{length, "1,5", `"1,5" is not a length; write decimals with a point, e.g. 1.5`},
+		{length, "1,5 mm", "write decimals with a point"},
+		{length, "1/2 in", `"1/2 in" is not a length; fractions are not read, write a decimal such as 0.5 in`},
+		{length, "", "is not a length"},
 	} {
 		_, err := tc.q.parse(tc.in)
 		if err == nil || !strings.Contains(err.Error(), tc.want) {
