@@ -16,7 +16,8 @@
 //
 // Text: the pinned svgo writes the content of <text> and <title> through encoding/xml's escaper, so
 // labels (element ids, titles and warning messages are user input) are passed to it unescaped; the
-// few attribute values that carry user text (aria-label) are escaped here with html.EscapeString.
+// few attribute values that carry user text (aria-label) are escaped here with the same escaper
+// (escapeAttr), which also replaces control characters XML forbids.
 // Escaping twice would show "&lt;" to the reader, so each string is escaped exactly once.
 //
 // Groups carry class names (rays, paraxial, elements, beam, waists, holes, mounts, beam-path,

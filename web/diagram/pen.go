@@ -2,10 +2,11 @@ package diagram
 
 import (
 	"bytes"
+	"encoding/xml"
 	"fmt"
-	"html"
 	"math"
 	"strconv"
+	"strings"
 
 	svg "github.com/ajstarks/svgo/float"
 )
@@ -52,7 +53,7 @@ func finite(vs ...float64) bool {
 // origin, a font default and an accessible label, then a <title>.
 func (p *pen) start(w, h float64, unit string, label string) {
 	fmt.Fprintf(&p.buf, `<svg xmlns="http://www.w3.org/2000/svg" width="%s%s" height="%s%s" viewBox="0 0 %s %s" role="img" aria-label="%s" font-family="sans-serif">`+"\n",
-		p.num(w), unit, p.num(h), unit, p.num(w), p.num(h), html.EscapeString(label))
+		p.num(w), unit, p.num(h), unit, p.num(w), p.num(h), escapeAttr(label))
 	p.c.Title(label)
 }
 
@@ -143,7 +144,17 @@ func (p *pen) cross(x, y, r float64, attrs ...string) {
 }
 
 // attr formats one attribute for svgo's attribute list; the value is escaped.
-func attr(name, value string) string { return name + `="` + html.EscapeString(value) + `"` }
+func attr(name, value string) string { return name + `="` + escapeAttr(value) + `"` }
+
+// escapeAttr escapes an attribute value for XML with encoding/xml's escaper, the one svgo uses for
+// text: besides quotes, '<' and '&' it replaces characters XML 1.0 forbids (control characters,
+// which a title may carry) with U+FFFD, so a standalone drawing always parses. html.EscapeString
+// left them raw.
+func escapeAttr(s string) string {
+	var b strings.Builder
+	xml.EscapeText(&b, []byte(s)) // writes to a strings.Builder cannot fail
+	return b.String()
+}
 
 // fmtNum formats a number for a label: at most 4 significant digits, no exponent, no trailing zeros.
 func fmtNum(v float64) string {

@@ -40,6 +40,26 @@ func TestEscaping(t *testing.T) {
 	}
 }
 
+// TestControlCharactersStayWellFormed gives a title with control characters (a form or a bench
+// file can carry them). XML 1.0 forbids them in a document, so a standalone drawing that wrote one
+// raw, e.g. in the aria-label, would not open at all; each is replaced by U+FFFD.
+func TestControlCharactersStayWellFormed(t *testing.T) {
+	r := fixtureReport()
+	r.Title = "a\x00b\x07c\x1bd"
+	b := fixtureBench()
+	b.Title = r.Title
+	for name, out := range map[string][]byte{
+		"side":  Side(r, SideOptions{}),
+		"table": Table(b, r, TableOptions{}),
+		"plan":  Plan(b, r),
+	} {
+		root := parseSVG(t, out) // strict: fails on a forbidden character
+		if got, want := root.attr("aria-label"), "a\uFFFDb\uFFFDc\uFFFDd"; !strings.HasSuffix(got, want) {
+			t.Errorf("%s: aria-label %q, want it to end with %q", name, got, want)
+		}
+	}
+}
+
 func TestNoNonFiniteNumbers(t *testing.T) {
 	nan, inf := math.NaN(), math.Inf(1)
 	r := fixtureReport()
