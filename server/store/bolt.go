@@ -3,10 +3,12 @@ package store
 import (
 	"encoding/binary"
 	"encoding/json"
+	"errors"
 	"fmt"
 	"time"
 
 	bolt "go.etcd.io/bbolt"
+	berrors "go.etcd.io/bbolt/errors"
 
 	"raytable/optics"
 )
@@ -30,6 +32,10 @@ type Bolt struct {
 // held by another process, so a second server on the same file fails instead of hanging.
 func OpenBolt(path string) (*Bolt, error) {
 	db, err := bolt.Open(path, 0o600, &bolt.Options{Timeout: time.Second})
+	if errors.Is(err, berrors.ErrTimeout) {
+		// bbolt says only "timeout"; the cause is nearly always a second server on the same file.
+		return nil, fmt.Errorf("open store %s: the file is locked by another process (is another raytable serving it? stop it or choose another --store): %w", path, err)
+	}
 	if err != nil {
 		return nil, fmt.Errorf("open store %s: %w", path, err)
 	}

@@ -4,6 +4,7 @@ import (
 	"bytes"
 	"errors"
 	"path/filepath"
+	"strings"
 	"sync"
 	"testing"
 	"time"
@@ -202,6 +203,21 @@ func TestBoltReopenKeepsRevisions(t *testing.T) {
 	got, err := s.Get(rev.ID)
 	if err != nil || !bytes.Equal(got.Bench, rev.Bench) {
 		t.Errorf("after reopen: %v, %v", got, err)
+	}
+}
+
+// TestBoltLockedFileSaysWhy opens a store file that another handle holds: the error says the file
+// is locked by another process, where bbolt alone says only "timeout".
+func TestBoltLockedFileSaysWhy(t *testing.T) {
+	path := filepath.Join(t.TempDir(), "locked.db")
+	s, err := OpenBolt(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer s.Close()
+	_, err = OpenBolt(path)
+	if err == nil || !strings.Contains(err.Error(), "locked by another process") || !strings.Contains(err.Error(), path) {
+		t.Errorf("second open: %v, want a message naming the file and the lock", err)
 	}
 }
 
