@@ -87,3 +87,24 @@ func TestNegativeZeroIsStoredAsZero(t *testing.T) {
 		t.Errorf("summary %q shows a negative zero", rev.Summary)
 	}
 }
+
+// TestCompareNamesTheMissingEntry: a compare with one entry left empty says that entry is empty,
+// not that it is malformed.
+func TestCompareNamesTheMissingEntry(t *testing.T) {
+	ts := newTestServer(t)
+	id := ts.startDemo(t)
+	for _, tc := range []struct{ query, want string }{
+		{"?a=" + id, "The second entry is empty"},
+		{"?b=" + id, "The first entry is empty"},
+		{"?a=" + id + "&b=%20", "The second entry is empty"},
+		{"?a=x&b=" + id, "The first entry is not a design link or id"},
+	} {
+		rec := ts.get(t, "/compare"+tc.query)
+		if rec.Code != http.StatusBadRequest {
+			t.Errorf("compare%s: %d, want 400", tc.query, rec.Code)
+		}
+		if body := rec.Body.String(); !strings.Contains(body, tc.want) {
+			t.Errorf("compare%s: no message %q", tc.query, tc.want)
+		}
+	}
+}

@@ -33,6 +33,11 @@ func (s *Server) compare(w http.ResponseWriter, r *http.Request) {
 	var ds [2]design
 	for i, in := range []string{p.InputA, p.InputB} {
 		name := []string{"first", "second"}[i]
+		if strings.TrimSpace(in) == "" {
+			p.Errors = append(p.Errors, "The "+name+" entry is empty: paste a link such as /r/… or the id of the design to compare.")
+			status = http.StatusBadRequest
+			continue
+		}
 		id, ok := idFromInput(in)
 		if !ok {
 			p.Errors = append(p.Errors, "The "+name+" entry is not a design link or id: paste a link such as /r/… or the id itself.")
