@@ -5,6 +5,8 @@ import (
 	"slices"
 	"strconv"
 	"strings"
+	"unicode"
+	"unicode/utf8"
 )
 
 // Limits that Validate enforces.
@@ -15,6 +17,9 @@ const (
 	MinLengthMM     = 1e-6    // smallest non-zero magnitude of any length (1 nm); less is a slip and overflows 1/x
 	MaxFanRays      = 201     // most rays in one meridional fan
 	MaxIDLength     = 40      // longest element id
+	MaxTitleLength  = 200     // longest title, in characters
+	MaxNotesLength  = 4000    // longest notes, in characters
+	MaxM2           = 10000   // largest beam quality factor; past it the embedded-Gaussian model says nothing useful
 	MaxIndex        = 5.0     // largest accepted refractive index (index or nd)
 	MaxHeadingDeg   = 360.0   // largest accepted |source heading|
 )
@@ -41,6 +46,8 @@ func validationProblems(b *Bench) []Problem {
 	if b.Format != FormatBenchV1 {
 		v.add("format", "must be %q, got %q", FormatBenchV1, b.Format)
 	}
+	v.text("title", b.Title, MaxTitleLength, false)
+	v.text("notes", b.Notes, MaxNotesLength, true)
 	v.wavelengths()
 	v.table()
 	v.source()
@@ -96,6 +103,23 @@ func (v *checker) nonNegative(path string, x float64) bool {
 		return false
 	}
 	return true
+}
+
+// text checks free text: at most max characters and no control characters, which break drawings
+// and downloads (line breaks and tabs are allowed where multiline is).
+func (v *checker) text(path, s string, max int, multiline bool) {
+	if n := utf8.RuneCountInString(s); n > max {
+		v.add(path, "is %d characters long; at most %d are allowed", n, max)
+	}
+	for _, r := range s {
+		if multiline && (r == '\n' || r == '\t' || r == '\r') {
+			continue
+		}
+		if unicode.IsControl(r) {
+			v.add(path, "contains the control character %U; use plain text", r)
+			return
+		}
+	}
 }
 
 // angle checks an angle whose tangent is taken: finite and strictly inside ±90°.
@@ -198,6 +222,8 @@ func (v *checker) source() {
 		v.length("source.beam.waist_at_mm", bm.WaistAtMM)
 		if bm.M2 != nil && v.finite("source.beam.m2", *bm.M2) && *bm.M2 < 1 {
 			v.add("source.beam.m2", "M² is at least 1 for any real beam, got %s", fmtNum(*bm.M2))
+		} else if bm.M2 != nil && *bm.M2 > MaxM2 {
+			v.add("source.beam.m2", "M² of %s is beyond %s, where a Gaussian beam model no longer describes the light", fmtNum(*bm.M2), fmtNum(MaxM2))
 		}
 	}
 }

@@ -242,3 +242,42 @@ func TestValidateNil(t *testing.T) {
 		t.Error("Validate(nil) must be an invalid-input error")
 	}
 }
+
+// TestValidateText: titles and notes are plain text of bounded length; a control character (a
+// NUL, an escape) makes drawings and downloads invalid XML, so it is refused with its code point.
+func TestValidateText(t *testing.T) {
+	tests := []struct {
+		name, title, notes string
+		want               []string
+	}{
+		{"plain", "Relay for the slit", "first line\nsecond\tline", nil},
+		{"NUL in title", "a\x00b", "", []string{"title"}},
+		{"line break in title", "two\nlines", "", []string{"title"}},
+		{"escape in notes", "", "colour \x1b[31m", []string{"notes"}},
+		{"title too long", strings.Repeat("x", MaxTitleLength+1), "", []string{"title"}},
+		{"notes too long", "", strings.Repeat("y", MaxNotesLength+1), []string{"notes"}},
+	}
+	for _, tt := range tests {
+		t.Run(tt.name, func(t *testing.T) {
+			b := fixture(t)
+			b.Title, b.Notes = tt.title, tt.notes
+			if got := paths(Validate(b)); !reflect.DeepEqual(got, tt.want) {
+				t.Errorf("problem paths %q, want %q", got, tt.want)
+			}
+		})
+	}
+}
+
+// TestValidateBeamQualityBound: M² runs from 1 (an ideal Gaussian, Siegman 1986) to MaxM2.
+func TestValidateBeamQualityBound(t *testing.T) {
+	for _, tt := range []struct {
+		m2   float64
+		want []string
+	}{{1, nil}, {MaxM2, nil}, {0.9, []string{"source.beam.m2"}}, {1e12, []string{"source.beam.m2"}}} {
+		b := fixture(t)
+		b.Source.Beam.M2 = ptr(tt.m2)
+		if got := paths(Validate(b)); !reflect.DeepEqual(got, tt.want) {
+			t.Errorf("m2 %g: problem paths %q, want %q", tt.m2, got, tt.want)
+		}
+	}
+}

@@ -84,7 +84,7 @@ func randomBench(rng *rand.Rand) *optics.Bench {
 	if rng.IntN(2) == 0 {
 		b.Source.Beam = &optics.Beam{WaistRadiusMM: pick(1e-6, 0.001, 0.01, 0.45, 3, 1e3), WaistAtMM: pick(0, -250, 100, 1e4, -1e6)}
 		if rng.IntN(2) == 0 {
-			b.Source.Beam.M2 = f(pick(1, 1.3, 15, 1e6))
+			b.Source.Beam.M2 = f(pick(1, 1.3, 15, 1e4))
 		}
 	}
 	n := 1 + rng.IntN(10)

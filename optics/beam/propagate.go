@@ -70,6 +70,9 @@ func Propagate(b *optics.Bench, p *optics.Path) (*optics.BeamReport, []optics.Wa
 	q0 := g.sourceQ(bm.WaistRadiusMM, bm.WaistAtMM)
 	t := trace(p, paraxial.Tangential, q0)
 	s := trace(p, paraxial.Sagittal, q0)
+	if at, angle, broke := breakdown(p, g, &t, &s); broke {
+		return nil, []optics.Warning{notParaxialWarning(p, at, angle)}
+	}
 	st := stretches(p)
 
 	rep := &optics.BeamReport{WavelengthNM: lam, M2: m2, Elements: make([]optics.BeamAt, 0, len(p.Spans))}
