@@ -22,3 +22,16 @@ func TestIconAndHead(t *testing.T) {
 		}
 	}
 }
+
+// TestStaticHasNoListing: /static/ serves its files, never a listing of them.
+func TestStaticHasNoListing(t *testing.T) {
+	ts := newTestServer(t)
+	for _, target := range []string{"/static/", "/static"} {
+		if rec := ts.get(t, target); rec.Code != http.StatusNotFound {
+			t.Errorf("GET %s: %d, want 404", target, rec.Code)
+		}
+	}
+	if rec := ts.get(t, "/static/raytable.css"); rec.Code != http.StatusOK {
+		t.Errorf("GET /static/raytable.css: %d", rec.Code)
+	}
+}

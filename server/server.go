@@ -5,6 +5,7 @@ import (
 	"io"
 	"log/slog"
 	"net/http"
+	"strings"
 	"time"
 
 	"github.com/a-h/templ"
@@ -117,6 +118,10 @@ func (s *Server) routes() chi.Router {
 func staticFiles() http.Handler {
 	fs := http.FileServerFS(static.Files)
 	return http.HandlerFunc(func(w http.ResponseWriter, r *http.Request) {
+		if r.URL.Path == "" || strings.HasSuffix(r.URL.Path, "/") {
+			http.NotFound(w, r) // files only, no folder listings
+			return
+		}
 		w.Header().Set("Cache-Control", "no-cache")
 		fs.ServeHTTP(w, r)
 	})

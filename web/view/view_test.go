@@ -92,6 +92,10 @@ func TestFieldMarksItsError(t *testing.T) {
 	if v, _ := attrOf(input, "aria-invalid"); v != "true" {
 		t.Errorf("input aria-invalid = %q, want true", v)
 	}
+	// The field points at its message, so a screen reader reads the rule with the field.
+	if v, _ := attrOf(input, "aria-describedby"); v == "" || v != attrOrEmpty(msg, "id") {
+		t.Errorf("input aria-describedby = %q, message id = %q", v, attrOrEmpty(msg, "id"))
+	}
 	if msg.FirstChild == nil || msg.FirstChild.Data != `"abc" is not a length` {
 		t.Errorf("message %v", msg.FirstChild)
 	}
@@ -103,4 +107,9 @@ func TestFieldMarksItsError(t *testing.T) {
 	if got := buf.String(); got != `<input type="hidden" name="elements[0]._type_shown" value="lens">` {
 		t.Errorf("hidden field rendered as %s", got)
 	}
+}
+
+func attrOrEmpty(n *html.Node, name string) string {
+	v, _ := attrOf(n, name)
+	return v
 }
