@@ -46,5 +46,4 @@ func unitDeg(deg float64) Point           { s, c := sincosDeg(deg); return Point
 func (p Point) perp() Point               { return Point{-p.Y, p.X} } // 90° counter-clockwise
 func headingOf(p Point) float64           { return NormDeg(math.Atan2(p.Y, p.X) * 180 / math.Pi) }
 func finite(v float64) bool               { return !math.IsNaN(v) && !math.IsInf(v, 0) }
-func (p Point) finite() bool              { return finite(p.X) && finite(p.Y) }
 func along(p Point, deg, d float64) Point { return p.add(unitDeg(deg).scale(d)) }

@@ -77,9 +77,6 @@ func newFoldedPath(b *optics.Bench, r *optics.Report) foldedPath {
 	return fp
 }
 
-// last is the path distance of the last node.
-func (fp foldedPath) last() float64 { return fp.nodes[len(fp.nodes)-1].s }
-
 // segment returns the index of the stretch holding s: i means nodes[i]..nodes[i+1]; len-1 the tail.
 func (fp foldedPath) segment(s float64) int {
 	for i := 0; i+1 < len(fp.nodes); i++ {

@@ -198,15 +198,6 @@ func niceLength(target float64) float64 {
 	return base
 }
 
-// truncate shortens s to at most n runes, ending with an ellipsis when cut.
-func truncate(s string, n int) string {
-	r := []rune(s)
-	if len(r) <= n {
-		return s
-	}
-	return string(r[:n-1]) + "…"
-}
-
 // wrap breaks s into lines of at most n runes at spaces (words longer than n are cut).
 func wrap(s string, n int) []string {
 	var lines []string
