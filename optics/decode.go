@@ -245,7 +245,7 @@ func (r *reader) beam(path string, raw json.RawMessage) *Beam {
 		return nil
 	}
 	r.unknown(path, members, "", beamKeys)
-	r.require(path, members, "waist_radius_mm", "waist_at_mm")
+	r.require(path, members, "waist_radius_mm") // waist_at_mm defaults to 0: the waist at the source
 	bm := &Beam{}
 	for _, m := range members {
 		p := field(path, m.key)

@@ -181,7 +181,7 @@ func TestDecodeInvalidInline(t *testing.T) {
 		{"ray at 90 degrees", validBench(`{"x_mm": 0, "y_mm": 0, "heading_deg": 0, "kind": "point", "na": 0.1, "rays": [{"height_mm": 0, "angle_deg": 90, "color": 1}]}`, ""),
 			[]string{"source.rays[0].color", "source.rays[0].angle_deg"}},
 		{"beam without waist", validBench(`{"x_mm": 0, "y_mm": 0, "heading_deg": 0, "kind": "point", "na": 0.1, "beam": {"m2": 1}}`, ""),
-			[]string{"source.beam.waist_radius_mm", "source.beam.waist_at_mm"}},
+			[]string{"source.beam.waist_radius_mm"}},
 		{"mount field unknown", validBench("", `{"id": "D1", "type": "dump", "gap_mm": 1, "mount": {"width_mm": 10, "depth_mm": 10, "height_mm": 5}}`),
 			[]string{"elements[0].mount.height_mm"}},
 	}
@@ -353,5 +353,17 @@ func BenchmarkDecode(b *testing.B) {
 		if _, err := Decode(data); err != nil {
 			b.Fatal(err)
 		}
+	}
+}
+
+// TestBeamDefaults: a beam given by its waist radius alone has its waist at the source and
+// M² 1 (issue 2's bench format: waist_at_mm defaults to 0, m2 to 1).
+func TestBeamDefaults(t *testing.T) {
+	b, err := Decode([]byte(validBench(`{"x_mm": 0, "y_mm": 0, "heading_deg": 0, "kind": "point", "na": 0.1, "beam": {"waist_radius_mm": 0.5}}`, "")))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if bm := b.Source.Beam; bm == nil || bm.WaistRadiusMM != 0.5 || bm.WaistAtMM != 0 || bm.BeamQuality() != 1 {
+		t.Errorf("beam %+v, want waist 0.5 mm at 0 with M² 1", bm)
 	}
 }
