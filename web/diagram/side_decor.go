@@ -59,6 +59,11 @@ func drawSideLegend(p *pen, f *sideFrame, r *optics.Report, paraxial bool, stops
 		item("beam 1/e² radius", func(x float64) {
 			p.rect(x, y-5, 18, 10, attr("fill", c), `fill-opacity="0.22"`, attr("stroke", c), `stroke-width="0.6"`)
 		})
+		if sagittalDiffers(r.Beam) {
+			item("across the table", func(x float64) {
+				p.line(x, y, x+18, y, attr("stroke", c), `stroke-width="0.9"`, `stroke-dasharray="3 2"`)
+			})
+		}
 	}
 	if stops > 0 {
 		item("ray stops (hover for why)", func(x float64) {

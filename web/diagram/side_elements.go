@@ -220,6 +220,33 @@ func drawBeamBand(p *pen, f *sideFrame, r *optics.Report) {
 	}
 	c := WavelengthColor(r.Beam.WavelengthNM)
 	p.polygon(xs, ys, `class="beam"`, attr("fill", c), `fill-opacity="0.22"`, attr("stroke", c), `stroke-opacity="0.6"`, `stroke-width="0.6"`)
+	if !sagittalDiffers(r.Beam) {
+		return
+	}
+	// Across the table the beam has its own radius wherever a tilted curved mirror made the two
+	// planes differ: drawn as dashed edges over the band.
+	p.group(`class="beam-sagittal"`, `fill="none"`, attr("stroke", c), `stroke-width="0.9"`, `stroke-dasharray="3 2"`)
+	for _, sign := range []float64{1, -1} {
+		xs, ys = xs[:0], ys[:0]
+		for _, s := range r.Beam.Samples {
+			if finite(s.PathMM, s.WSMM) {
+				xs, ys = append(xs, f.x(s.PathMM)), append(ys, f.y(sign*s.WSMM))
+			}
+		}
+		p.polyline(xs, ys)
+	}
+	p.gend()
+}
+
+// sagittalDiffers reports whether the beam's radius across the table differs anywhere from its
+// radius in the table plane by more than 1 %, enough to show at drawing scale.
+func sagittalDiffers(b *optics.BeamReport) bool {
+	for _, s := range b.Samples {
+		if finite(s.WTMM, s.WSMM) && math.Abs(s.WSMM-s.WTMM) > 0.01*math.Max(s.WTMM, s.WSMM) {
+			return true
+		}
+	}
+	return false
 }
 
 // drawWaists marks each waist with a tick across the band and its radius as text.
@@ -248,7 +275,9 @@ func drawWaists(p *pen, f *sideFrame, r *optics.Report) {
 			level = 1
 		}
 		lastX[level] = x + half
-		p.text(x, math.Max(top-6-12*float64(level), f.top+10+12*float64(level)), label,
+		// Keep the label inside the drawing when the waist sits at either end of it.
+		tx := math.Min(math.Max(x, f.left+half), f.w-half)
+		p.text(tx, math.Max(top-6-12*float64(level), f.top+10+12*float64(level)), label,
 			`font-size="10"`, `text-anchor="middle"`, `fill="#333333"`)
 	}
 }
