@@ -42,8 +42,7 @@ func Run(b *optics.Bench) (*optics.Report, error) {
 	r.Warnings = append(r.Warnings, beamWarnings...)
 	r.Warnings = append(r.Warnings, beam.SafetyWarnings(b, p)...)
 
-	g := layout.Holes(b.Table)
-	r.Holes = optics.HoleGrid{Kind: g.Kind, Thread: g.Thread, PitchMM: g.PitchMM, OffsetMM: g.OffsetMM, Columns: g.Columns, Rows: g.Rows}
+	r.Holes = layout.Holes(b.Table).HoleGrid
 	var planWarnings []optics.Warning
 	r.Placement, planWarnings = layout.Plan(b, r.Elements, beamRadius(r, b))
 	r.Warnings = append(r.Warnings, planWarnings...)

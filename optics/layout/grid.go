@@ -6,17 +6,11 @@ import (
 	"raytable/optics"
 )
 
-// Grid is a breadboard's hole pattern: holes every PitchMM in both directions, the first one
-// OffsetMM from the front and the left edge, Columns across the width and Rows along the depth,
-// every hole centre strictly inside the table.
-type Grid struct {
-	Kind     string  `json:"kind"`   // optics.GridMetric25, optics.GridImperial1 or optics.GridNone
-	Thread   string  `json:"thread"` // the screw the holes take; "" without a grid
-	PitchMM  float64 `json:"pitch_mm"`
-	OffsetMM float64 `json:"offset_mm"`
-	Columns  int     `json:"columns"`
-	Rows     int     `json:"rows"`
-}
+// Grid is a breadboard's hole pattern as the report carries it (holes every PitchMM in both
+// directions, the first one OffsetMM from the front and the left edge, Columns across the width
+// and Rows along the depth, every hole centre strictly inside the table), with the hole geometry
+// built on it.
+type Grid struct{ optics.HoleGrid }
 
 // Common practice for optical breadboards: metric tables have M6 holes on a 25 mm pitch, imperial
 // ones 1/4-20 holes on a 1 in pitch, and the first hole sits half a pitch from the front and left
@@ -31,7 +25,7 @@ const (
 // Holes describes the hole grid of a table; a table without a grid (or with an unknown grid name,
 // or without a usable size) has no columns and no rows.
 func Holes(t optics.Table) Grid {
-	g := Grid{Kind: t.Grid}
+	g := Grid{optics.HoleGrid{Kind: t.Grid}}
 	switch t.Grid {
 	case optics.GridMetric25:
 		g.Thread, g.PitchMM, g.OffsetMM = "M6", metricPitchMM, metricOffsetMM

@@ -151,6 +151,5 @@ func fixtureReport() *optics.Report {
 // holesFor is the hole grid the analysis reports for a table; the counting rule itself is tested
 // in optics/layout.
 func holesFor(t optics.Table) optics.HoleGrid {
-	g := layout.Holes(t)
-	return optics.HoleGrid{Kind: g.Kind, Thread: g.Thread, PitchMM: g.PitchMM, OffsetMM: g.OffsetMM, Columns: g.Columns, Rows: g.Rows}
+	return layout.Holes(t).HoleGrid
 }
