@@ -6,6 +6,7 @@ import (
 	"testing"
 
 	"raytable/optics"
+	"raytable/optics/internal/approx"
 )
 
 // singlet is a lens of two faces (curvatures c1, c2, thickness t, index n) at z = 10.
@@ -15,7 +16,7 @@ func singlet(c1, c2, t, n float64) *optics.Path {
 
 // gullstrandBFL is the paraxial back focal length of a thick lens in air from Gullstrand's
 // equation: P = P1 + P2 - (t/n)·P1·P2 with Pi = (n-1)c1, (1-n)c2, and BFL = (1 - (t/n)·P1) / P
-// (e.g. Hecht, Optics, §6.1, thick lenses).
+// (e.g. E. Hecht, Optics, 4th ed., 2002, §6.1, thick lenses; section from memory).
 func gullstrandBFL(c1, c2, t, n float64) float64 {
 	p1, p2 := (n-1)*c1, (1-n)*c2
 	p := p1 + p2 - t/n*p1*p2
@@ -45,7 +46,7 @@ func TestSingletSmallApertureMeetsParaxialFocus(t *testing.T) {
 		t.Run(c.name, func(t *testing.T) {
 			want := gullstrandBFL(c.c1, c.c2, c.th, c.nn)
 			got := axialCrossing(t, singlet(c.c1, c.c2, c.th, c.nn), 0.01)
-			if relErr(got, want) > paraxRel {
+			if !approx.Rel(got, want, paraxRel) {
 				t.Errorf("exact focus %.10g mm after the last vertex, Gullstrand BFL %.10g", got, want)
 			}
 		})
@@ -66,17 +67,18 @@ func TestSphericalAberrationGrowsAsHeightSquared(t *testing.T) {
 			if lsa1 <= 0 {
 				t.Fatalf("LSA(%g) = %g, want > 0 (under-corrected)", h, lsa1)
 			}
-			if r := lsa2 / lsa1; math.Abs(r-4) > 4*ratioTol {
+			if r := lsa2 / lsa1; !approx.Rel(r, 4, ratioTol) {
 				t.Errorf("LSA(2h)/LSA(h) = %.6f, want 4", r)
 			}
 		})
 	}
 }
 
-// Thin-lens aberration theory (e.g. Kingslake, Lens Design Fundamentals, ch. 4; Hecht, Optics,
-// §6.3): for an object at infinity a singlet has least spherical aberration at the shape factor
-// X = (R2+R1)/(R2-R1) = 2(n²-1)/(n+2). Scan X at fixed focal length with the exact trace at small
-// aperture and find the minimum of the longitudinal aberration.
+// Thin-lens aberration theory (e.g. R. Kingslake, Lens Design Fundamentals; E. Hecht, Optics,
+// 4th ed., §6.3; chapter and section from memory): for an object at infinity a singlet has least
+// spherical aberration at the shape factor X = (R2+R1)/(R2-R1) = 2(n²-1)/(n+2). Scan X at fixed
+// focal length with the exact trace at small aperture and find the minimum of the longitudinal
+// aberration.
 func TestBendingForMinimumSphericalAberration(t *testing.T) {
 	const f, th, h = 100.0, 1.0, 2.0 // thin-ish lens at f/25
 	for _, n := range []float64{1.5, 1.65, 1.8} {
@@ -89,7 +91,7 @@ func TestBendingForMinimumSphericalAberration(t *testing.T) {
 			}
 			best := goldenMin(lsa, -0.5, 2.5, 1e-5)
 			want := 2 * (n*n - 1) / (n + 2)
-			if math.Abs(best-want) > bendingTol {
+			if !approx.Abs(best, want, bendingTol) {
 				t.Errorf("least aberration at X = %.4f, third-order prediction %.4f", best, want)
 			}
 			t.Logf("n=%g: exact minimum at X = %.4f, third order %.4f", n, best, want)

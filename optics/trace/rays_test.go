@@ -5,6 +5,7 @@ import (
 	"testing"
 
 	"raytable/optics"
+	"raytable/optics/internal/approx"
 )
 
 func ptr[T any](v T) *T { return &v }
@@ -23,16 +24,18 @@ func TestRaysCollimated(t *testing.T) {
 	if len(rs) != 2+2*2*5 {
 		t.Fatalf("%d rays, want 2 explicit + 2 fields × 2 wavelengths × 5", len(rs))
 	}
-	// Explicit rays: start (x, height, 0), direction ∝ (tan x_angle, tan angle, 1) (issue 2, §4).
+	// Explicit rays: start (x, height, 0), direction ∝ (tan x_angle, tan angle, 1): each angle is
+	// the slope angle in its plane of the frame of README, 'Report, format raytable/report/v1',
+	// Frames (u = dy/dz = tan angle_deg).
 	e1 := rs[1]
 	if e1.Name != "explicit[1]" || e1.K != 0 || e1.Field != "" {
 		t.Errorf("second explicit ray %+v", e1)
 	}
 	wantDir := Unit(Vec{math.Tan(math.Pi / 180), math.Tan(-3 * math.Pi / 180), 1})
-	if Norm(Sub(e1.Start.Dir, wantDir)) > roundOff || e1.Start.Pos != (Vec{-0.5, 0, 0}) {
+	if !approx.Abs(Norm(Sub(e1.Start.Dir, wantDir)), 0, approx.Rounding) || e1.Start.Pos != (Vec{-0.5, 0, 0}) {
 		t.Errorf("explicit[1] starts %+v, want pos (-0.5, 0, 0) dir %+v", e1.Start, wantDir)
 	}
-	if e0 := rs[0]; e0.ParaxialY != 1 || math.Abs(e0.ParaxialU-math.Tan(2*math.Pi/180)) > roundOff {
+	if e0 := rs[0]; e0.ParaxialY != 1 || !approx.Abs(e0.ParaxialU, math.Tan(2*math.Pi/180), approx.Rounding) {
 		t.Errorf("explicit[0] paraxial (%g, %g), want (1, tan 2°)", e0.ParaxialY, e0.ParaxialU)
 	}
 	// Fans: field 0.5 deg, second wavelength is the 4th fan; pupil -1 .. 1 across the bundle.
@@ -43,10 +46,10 @@ func TestRaysCollimated(t *testing.T) {
 	u := math.Tan(0.5 * math.Pi / 180)
 	for j, r := range fan {
 		pupil := -1 + 0.5*float64(j)
-		if math.Abs(r.Pupil-pupil) > roundOff || math.Abs(r.Start.Pos.Y-2*pupil) > roundOff || r.ParaxialY != r.Start.Pos.Y {
+		if !approx.Abs(r.Pupil, pupil, approx.Rounding) || !approx.Abs(r.Start.Pos.Y, 2*pupil, approx.Rounding) || r.ParaxialY != r.Start.Pos.Y {
 			t.Errorf("ray %d: pupil %g at y %g, want %g at %g", j, r.Pupil, r.Start.Pos.Y, pupil, 2*pupil)
 		}
-		if math.Abs(r.Start.Dir.Y/r.Start.Dir.Z-u) > roundOff || r.ParaxialU != u || r.Start.Dir.X != 0 {
+		if !approx.Abs(r.Start.Dir.Y/r.Start.Dir.Z, u, approx.Rounding) || r.ParaxialU != u || r.Start.Dir.X != 0 {
 			t.Errorf("ray %d: dir %+v, paraxial u %g, want slope tan 0.5° = %g", j, r.Start.Dir, r.ParaxialU, u)
 		}
 	}
@@ -67,11 +70,11 @@ func TestRaysPointSource(t *testing.T) {
 	if top.Field != "1.5 mm" || top.Name != "fan 1.5mm 780nm 2" || top.Pupil != 1 {
 		t.Errorf("last ray %+v", top)
 	}
-	if top.Start.Pos != (Vec{0, 1.5, 0}) || math.Abs(top.Start.Dir.Y-0.1) > roundOff ||
-		math.Abs(top.Start.Dir.Z-math.Sqrt(0.99)) > roundOff {
+	if top.Start.Pos != (Vec{0, 1.5, 0}) || !approx.Abs(top.Start.Dir.Y, 0.1, approx.Rounding) ||
+		!approx.Abs(top.Start.Dir.Z, math.Sqrt(0.99), approx.Rounding) {
 		t.Errorf("marginal ray starts %+v, want from (0, 1.5, 0) with dir (0, 0.1, sqrt 0.99)", top.Start)
 	}
-	if top.ParaxialY != 1.5 || math.Abs(top.ParaxialU-0.1) > roundOff {
+	if top.ParaxialY != 1.5 || !approx.Abs(top.ParaxialU, 0.1, approx.Rounding) {
 		t.Errorf("paraxial (%g, %g), want (1.5, 0.1)", top.ParaxialY, top.ParaxialU)
 	}
 	if mid := rs[4]; mid.Start.Dir != (Vec{0, 0, 1}) || mid.ParaxialU != 0 {
@@ -94,7 +97,7 @@ func TestRaysTraceThroughThinLens(t *testing.T) {
 	buf := make([]Point, 0, len(p.Surfaces))
 	for _, r := range rs {
 		end := last(mustTraceK(t, p, r.K, r.Start, buf))
-		if math.Abs(end.Pos.Y) > 1e-12 {
+		if !approx.Abs(end.Pos.Y, 0, approx.Rounding) {
 			t.Errorf("%s lands at y = %g on the focal plane, want 0", r.Name, end.Pos.Y)
 		}
 	}

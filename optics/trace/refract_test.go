@@ -7,6 +7,7 @@ import (
 	"testing"
 
 	"raytable/optics"
+	"raytable/optics/internal/approx"
 )
 
 // Snell's law at normal incidence (θ1 = 0 gives θ2 = 0): a ray along the normal is not bent.
@@ -26,10 +27,10 @@ func TestNormalIncidencePassesUndeviated(t *testing.T) {
 		t.Run(c.name, func(t *testing.T) {
 			r := mustTrace(t, c.p, c.ray)
 			for _, pt := range r.Points {
-				if math.Abs(pt.Dir.X) > roundOff || math.Abs(pt.Dir.Y) > roundOff || math.Abs(pt.Dir.Z-1) > roundOff {
+				if !approx.Abs(pt.Dir.X, 0, approx.Rounding) || !approx.Abs(pt.Dir.Y, 0, approx.Rounding) || !approx.Abs(pt.Dir.Z, 1, approx.Rounding) {
 					t.Errorf("surface %d: dir %+v, want (0,0,1)", pt.Surface, pt.Dir)
 				}
-				if math.Abs(pt.Pos.X-c.ray.Pos.X) > roundOff || math.Abs(pt.Pos.Y-c.ray.Pos.Y) > roundOff {
+				if !approx.Abs(pt.Pos.X, c.ray.Pos.X, approx.Rounding) || !approx.Abs(pt.Pos.Y, c.ray.Pos.Y, approx.Rounding) {
 					t.Errorf("surface %d: pos %+v moved off the line of %+v", pt.Surface, pt.Pos, c.ray.Pos)
 				}
 			}
@@ -50,13 +51,13 @@ func TestSnellAtFlatFace(t *testing.T) {
 					r := mustTrace(t, path(face(10, 0, n2)), Start{Pos: Vec{0.5, -1, 0}, Dir: d})
 					out := r.Points[0].Dir
 					sin2 := math.Hypot(out.X, out.Y)
-					if got, want := n2*sin2, 1*math.Sin(th); math.Abs(got-want) > roundOff {
+					if got, want := n2*sin2, 1*math.Sin(th); !approx.Abs(got, want, approx.Rounding) {
 						t.Errorf("n2 sin θ2 = %.15g, n1 sin θ1 = %.15g", got, want)
 					}
-					if cross := out.X*d.Y - out.Y*d.X; math.Abs(cross) > roundOff {
+					if cross := out.X*d.Y - out.Y*d.X; !approx.Abs(cross, 0, approx.Rounding) {
 						t.Errorf("refracted ray left the plane of incidence: %+v vs %+v", out, d)
 					}
-					if math.Abs(Norm(out)-1) > roundOff {
+					if !approx.Abs(Norm(out), 1, approx.Rounding) {
 						t.Errorf("|dir| = %.15g, want 1", Norm(out))
 					}
 				})
@@ -65,10 +66,10 @@ func TestSnellAtFlatFace(t *testing.T) {
 	}
 }
 
-// Total internal reflection sets in exactly at the critical angle θc = asin(n2/n1) (Hecht,
-// Optics, §4.7). The test lens is a hemisphere whose flat back face passes through the centre of
-// its curved front: a ray aimed at the centre crosses the curved face along its normal (unbent)
-// and meets the flat face, on axis, at exactly the launch angle.
+// Total internal reflection sets in exactly at the critical angle θc = asin(n2/n1) (Hecht, Optics,
+// 4th ed., §4.7, from memory). The test lens is a hemisphere whose flat back face passes through
+// the centre of its curved front: a ray aimed at the centre crosses the curved face along its
+// normal (unbent) and meets the flat face, on axis, at exactly the launch angle.
 func TestTotalInternalReflectionBeyondCriticalAngle(t *testing.T) {
 	const gap, radius = 10.0, 20.0
 	const margin = 1e-7 // rad either side of θc; the path to the back face bends by ~1e-16
@@ -82,7 +83,7 @@ func TestTotalInternalReflectionBeyondCriticalAngle(t *testing.T) {
 			r := mustTrace(t, p, launch(crit-margin))
 			out := last(r).Dir
 			// Snell again: sin θ2 = n sin θ1 just below 1, the ray leaves grazing.
-			if got, want := out.Y, n*math.Sin(crit-margin); math.Abs(got-want) > 1e-12 {
+			if got, want := out.Y, n*math.Sin(crit-margin); !approx.Abs(got, want, approx.Rounding) {
 				t.Errorf("sin θ out = %.15g, want %.15g", got, want)
 			}
 		})
@@ -111,7 +112,7 @@ func TestWavelengthIndexSelectsMedium(t *testing.T) {
 	s := Start{Dir: Vec{0, math.Sin(th), math.Cos(th)}}
 	for k, n := range f.Index {
 		r := Trace(p, k, s, nil)
-		if got := n * r.Points[0].Dir.Y; math.Abs(got-math.Sin(th)) > roundOff {
+		if got := n * r.Points[0].Dir.Y; !approx.Abs(got, math.Sin(th), approx.Rounding) {
 			t.Errorf("k=%d: n sin θ2 = %.15g, want sin 30° = 0.5", k, got)
 		}
 	}
