@@ -3,16 +3,17 @@ package beam
 import (
 	"math"
 	"testing"
+
+	"raytable/optics/internal/approx"
 )
 
 const (
-	tightRel = 1e-9 // relative tolerance for closed forms the q law reproduces exactly
-	hene     = 632.8
-	nd       = 1064.0
+	hene = 632.8
+	nd   = 1064.0
 )
 
-// The Rayleigh range of a beam, zR = π w0² / (M² λ) (Siegman, Lasers, 1986, ch. 17; embedded
-// Gaussian with M²). Checked against hand values and against the waist entry Propagate reports.
+// The Rayleigh range of a beam, zR = π w0² / (M² λ) (Siegman, Lasers, 1986, ch. 17, chapter from
+// memory; embedded Gaussian with M²). Checked against hand values and against the waist entry Propagate reports.
 func TestRayleighRange(t *testing.T) {
 	cases := []struct {
 		name            string
@@ -28,7 +29,7 @@ func TestRayleighRange(t *testing.T) {
 	}
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {
-			if got := RayleighRangeMM(c.w0, c.lambda, c.m2); relErr(got, c.wantRayleighMM) > tightRel {
+			if got := RayleighRangeMM(c.w0, c.lambda, c.m2); !approx.Rel(got, c.wantRayleighMM, approx.VeryClose) {
 				t.Fatalf("RayleighRangeMM = %v, want %v", got, c.wantRayleighMM)
 			}
 			p := buildPath(c.lambda, plane("S", 500, 0))
@@ -37,8 +38,8 @@ func TestRayleighRange(t *testing.T) {
 				t.Fatalf("waists = %d, want the source's own", len(rep.Waists))
 			}
 			w := rep.Waists[0]
-			if w.After != nil || w.PathMM != c.wantWaistPathMM || relErr(*w.RadiusTMM, c.w0) > tightRel ||
-				relErr(*w.RayleighTMM, c.wantRayleighMM) > tightRel || relErr(*w.RayleighSMM, c.wantRayleighMM) > tightRel {
+			if w.After != nil || w.PathMM != c.wantWaistPathMM || !approx.Rel(*w.RadiusTMM, c.w0, approx.VeryClose) ||
+				!approx.Rel(*w.RayleighTMM, c.wantRayleighMM, approx.VeryClose) || !approx.Rel(*w.RayleighSMM, c.wantRayleighMM, approx.VeryClose) {
 				t.Fatalf("waist %+v", w)
 			}
 		})
@@ -64,10 +65,10 @@ func TestFreeSpace(t *testing.T) {
 		}
 		wantW := w0 * math.Sqrt(1+(z/zR)*(z/zR))
 		wantR := z * (1 + (zR/z)*(zR/z))
-		if relErr(e.WTMM, wantW) > tightRel || relErr(e.WSMM, wantW) > tightRel || relErr(e.ArrivingWTMM, wantW) > tightRel {
+		if !approx.Rel(e.WTMM, wantW, approx.VeryClose) || !approx.Rel(e.WSMM, wantW, approx.VeryClose) || !approx.Rel(e.ArrivingWTMM, wantW, approx.VeryClose) {
 			t.Errorf("%s: w = %v/%v, want %v", e.ID, e.WTMM, e.WSMM, wantW)
 		}
-		if e.RTMM == nil || relErr(*e.RTMM, wantR) > tightRel || relErr(*e.RSMM, wantR) > tightRel {
+		if e.RTMM == nil || !approx.Rel(*e.RTMM, wantR, approx.VeryClose) || !approx.Rel(*e.RSMM, wantR, approx.VeryClose) {
 			t.Errorf("%s: R = %v, want %v", e.ID, e.RTMM, wantR)
 		}
 		if e.Transmitted != 1 {
@@ -80,7 +81,7 @@ func TestFreeSpace(t *testing.T) {
 	}
 	for i, s := range rep.Samples {
 		z := s.PathMM - waistAt
-		if want := w0 * math.Sqrt(1+(z/zR)*(z/zR)); relErr(s.WTMM, want) > tightRel {
+		if want := w0 * math.Sqrt(1+(z/zR)*(z/zR)); !approx.Rel(s.WTMM, want, approx.VeryClose) {
 			t.Fatalf("sample %d at %v: w %v, want %v", i, s.PathMM, s.WTMM, want)
 		}
 		if i > 0 && s.PathMM <= rep.Samples[i-1].PathMM {

@@ -100,10 +100,6 @@ func beamBench(wavelengthNM, w0, waistAt, m2 float64) *optics.Bench {
 	}
 }
 
-func relErr(got, want float64) float64 {
-	return math.Abs(got-want) / math.Max(math.Abs(want), 1e-300)
-}
-
 // waistAfter returns the waists whose `after` is id ("" for before the first element).
 func waistAfter(r *optics.BeamReport, id string) []optics.Waist {
 	var out []optics.Waist

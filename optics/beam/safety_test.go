@@ -26,7 +26,8 @@ func find(ws []optics.Warning, code, element string) (optics.Warning, bool) {
 
 // Back-reflections: a face concave towards the incoming light reflects like a concave mirror of
 // the same radius and focuses a collimated beam at R/2 in front of it (mirror focal length R/2,
-// the concave-mirror convention of issue 2). Light reflected inside glass comes out with its
+// Hecht, Optics, 4th ed., §5.4, from memory; README, 'Report, format raytable/report/v1', Frames,
+// for the concave mirror as a positive lens). Light reflected inside glass comes out with its
 // remaining distance divided by n (reduced thickness; the plate shift t(1 - 1/n)).
 func TestBackReflectionFocus(t *testing.T) {
 	cases := []struct {
@@ -70,8 +71,8 @@ func TestBackReflectionFocus(t *testing.T) {
 }
 
 // Foci in or near glass, from the paraxial bundle and from the beam. A thin lens f = 50 at 100
-// focuses at 150; a plate of thickness t and index n moves the focus by t(1 - 1/n) (issue 2's
-// plane-parallel plate check; from memory, any optics text).
+// focuses at 150; a plate of thickness t and index n moves the focus by t(1 - 1/n) (the
+// plane-parallel plate's focal shift, from memory; paraxial's TestPlateShiftsFocus checks it).
 func TestFocusInOrNearGlass(t *testing.T) {
 	cases := []struct {
 		name    string
