@@ -6,6 +6,7 @@ import (
 	"testing"
 
 	"raytable/optics"
+	"raytable/optics/internal/approx"
 )
 
 func TestLagrangeInvariantConserved(t *testing.T) {
@@ -23,7 +24,7 @@ func TestLagrangeInvariantConserved(t *testing.T) {
 				// The Lagrange invariant n(ū y - u ȳ) is the same at every surface of a paraxial
 				// system (Welford, Aberrations of Optical Systems, 1986, ch. 3, from memory).
 				for i, hi := range res.Lagrange {
-					if !relClose(hi, h, tolRounding, 0) {
+					if !approx.Rel(hi, h, approx.Rounding) {
 						t.Fatalf("trial %d %s plane %d: H at surface %d = %.15g, at the source %.15g",
 							trial, b.Source.Kind, plane, i, hi, h)
 					}
@@ -69,13 +70,13 @@ func TestApertureStopChoice(t *testing.T) {
 			for i, s := range tc.path.Surfaces {
 				y := math.Abs(res.Marginal[i].Y)
 				if i == res.StopSurface {
-					checkClose(t, "marginal height at the stop", y, s.SemiAperture, tolRounding)
-				} else if y > s.SemiAperture*(1+tolRounding) && !s.Stops && (i == 0 || !tc.path.Surfaces[i-1].Stops) {
+					approx.Check(t, "marginal height at the stop", y, s.SemiAperture, approx.Rounding)
+				} else if y > s.SemiAperture*(1+approx.Rounding) && !s.Stops && (i == 0 || !tc.path.Surfaces[i-1].Stops) {
 					t.Errorf("marginal ray at %s = %g exceeds its semi-aperture %g", s.ID, y, s.SemiAperture)
 				}
 			}
 			// The chief ray crosses the axis at the stop.
-			if res.StopSurface >= 0 && math.Abs(res.Chief[res.StopSurface].Y) > 1e-12 {
+			if res.StopSurface >= 0 && !approx.Abs(res.Chief[res.StopSurface].Y, 0, approx.Rounding) {
 				t.Errorf("chief ray at the stop = %g, want 0", res.Chief[res.StopSurface].Y)
 			}
 		})
@@ -94,8 +95,8 @@ func TestTiltedMirrorApertureInTheTablePlane(t *testing.T) {
 		t.Errorf("aperture_stop tangential %q sagittal %q, want M1 and source",
 			tan.Values.ApertureStop, sag.Values.ApertureStop)
 	}
-	checkClose(t, "tangential marginal height", tan.Marginal[0].Y, 5*math.Cos(math.Pi/4), tolRounding)
-	checkClose(t, "sagittal marginal height", sag.Marginal[0].Y, 4, tolRounding)
+	approx.Check(t, "tangential marginal height", tan.Marginal[0].Y, 5*math.Cos(math.Pi/4), approx.Rounding)
+	approx.Check(t, "sagittal marginal height", sag.Marginal[0].Y, 4, approx.Rounding)
 }
 
 func TestEntrancePupilOfStopBehindThinLens(t *testing.T) {
@@ -111,11 +112,11 @@ func TestEntrancePupilOfStopBehindThinLens(t *testing.T) {
 		// memory) with the stop as an object d behind the lens, looking back, puts the image at
 		// s_i = f d/(d - f) in front of the lens, i.e. f d/(f - d) downstream of it, with
 		// magnification f/(f - d).
-		checkPtr(t, "entrance_pupil_mm", res.Values.EntrancePupilMM, f*d/(f-d), 1e-10)
-		checkPtr(t, "entrance_pupil_radius_mm", res.Values.EntrancePupilRadiusMM, stopRadius*math.Abs(f/(f-d)), 1e-10)
+		approx.CheckPtr(t, "entrance_pupil_mm", res.Values.EntrancePupilMM, f*d/(f-d), tolImaging)
+		approx.CheckPtr(t, "entrance_pupil_radius_mm", res.Values.EntrancePupilRadiusMM, stopRadius*math.Abs(f/(f-d)), tolImaging)
 		// Nothing follows the lens but the stop, so the exit pupil is the stop itself.
-		checkPtr(t, "exit_pupil_mm", res.Values.ExitPupilMM, d, 1e-10)
-		checkPtr(t, "exit_pupil_radius_mm", res.Values.ExitPupilRadiusMM, stopRadius, 1e-10)
+		approx.CheckPtr(t, "exit_pupil_mm", res.Values.ExitPupilMM, d, tolImaging)
+		approx.CheckPtr(t, "exit_pupil_radius_mm", res.Values.ExitPupilRadiusMM, stopRadius, tolImaging)
 	}
 }
 
@@ -126,18 +127,18 @@ func TestExitPupilOfStopBeforeThinLens(t *testing.T) {
 	// Gaussian lens equation (Hecht, Optics, 4th ed., eq. 5.17, from memory): a stop d = 50 mm in
 	// front of f = 100 mm images to s_i = 1/(1/f - 1/d) = -100 mm, a virtual image 100 mm in front
 	// of the lens, magnified -s_i/s_o = 2.
-	checkPtr(t, "exit_pupil_mm", res.Values.ExitPupilMM, -100, 1e-10)
-	checkPtr(t, "exit_pupil_radius_mm", res.Values.ExitPupilRadiusMM, 2*stopRadius, 1e-10)
+	approx.CheckPtr(t, "exit_pupil_mm", res.Values.ExitPupilMM, -100, tolImaging)
+	approx.CheckPtr(t, "exit_pupil_radius_mm", res.Values.ExitPupilRadiusMM, 2*stopRadius, tolImaging)
 	// The stop is in object space: it is its own entrance pupil.
-	checkPtr(t, "entrance_pupil_mm", res.Values.EntrancePupilMM, -d, 1e-10)
-	checkPtr(t, "entrance_pupil_radius_mm", res.Values.EntrancePupilRadiusMM, stopRadius, 1e-10)
+	approx.CheckPtr(t, "entrance_pupil_mm", res.Values.EntrancePupilMM, -d, tolImaging)
+	approx.CheckPtr(t, "entrance_pupil_radius_mm", res.Values.EntrancePupilRadiusMM, stopRadius, tolImaging)
 	// f-number of a system focused at infinity: N = f / D, D the entrance pupil diameter
 	// (Hecht, Optics, 4th ed., sec. 5.3.3, from memory).
-	checkPtr(t, "f_number", res.Values.FNumber, f/(2*stopRadius), 1e-10)
+	approx.CheckPtr(t, "f_number", res.Values.FNumber, f/(2*stopRadius), tolImaging)
 	// Image NA for a collimated beam: the marginal ray leaves at slope D/2 / f.
-	checkPtr(t, "image_na", res.Values.ImageNA, stopRadius/f, 1e-10)
+	approx.CheckPtr(t, "image_na", res.Values.ImageNA, stopRadius/f, tolImaging)
 	// Image height at the focal plane: f tan(field) (Hecht, Optics, sec. 5.7, from memory).
-	checkPtr(t, "image_height_mm", res.Values.ImageHeightMM, f*math.Tan(2*math.Pi/180), 1e-10)
+	approx.CheckPtr(t, "image_height_mm", res.Values.ImageHeightMM, f*math.Tan(2*math.Pi/180), tolImaging)
 }
 
 func TestFiniteConjugates(t *testing.T) {
@@ -150,34 +151,36 @@ func TestFiniteConjugates(t *testing.T) {
 	if v.ApertureStop != StopSource {
 		t.Errorf("aperture_stop = %q, want the source", v.ApertureStop)
 	}
-	checkPtr(t, "image_distance_mm", v.ImageDistanceMM, 200, 1e-10)
-	checkPtr(t, "magnification", v.Magnification, -1, 1e-10)
-	checkPtr(t, "image_height_mm", v.ImageHeightMM, -h, 1e-10)
+	approx.CheckPtr(t, "image_distance_mm", v.ImageDistanceMM, 200, tolImaging)
+	approx.CheckPtr(t, "magnification", v.Magnification, -1, tolImaging)
+	approx.CheckPtr(t, "image_height_mm", v.ImageHeightMM, -h, tolImaging)
 	// Unit magnification keeps the NA: image NA = NA / |m| in the paraxial (Abbe sine) limit
 	// (Born and Wolf, Principles of Optics, sec. 4.5, from memory); working f-number 1/(2 NA)
 	// (common practice).
-	checkPtr(t, "image_na", v.ImageNA, na, 1e-10)
-	checkPtr(t, "f_number", v.FNumber, 1/(2*na), 1e-10)
+	approx.CheckPtr(t, "image_na", v.ImageNA, na, tolImaging)
+	approx.CheckPtr(t, "f_number", v.FNumber, 1/(2*na), tolImaging)
 	// The source limits the cone by angle at every object point: the chief ray leaves parallel
 	// to the axis and the entrance pupil is at infinity; the exit pupil is then the rear focal
 	// plane.
 	checkNil(t, "entrance_pupil_mm", v.EntrancePupilMM)
-	checkPtr(t, "exit_pupil_mm", v.ExitPupilMM, f, 1e-10)
+	approx.CheckPtr(t, "exit_pupil_mm", v.ExitPupilMM, f, tolImaging)
 	// H = n u h at the object for a chief ray from the object point (Welford, Aberrations of
 	// Optical Systems, 1986, from memory), here n ū y - n u ȳ = -NA·h.
-	checkPtr(t, "lagrange_invariant_mm", v.LagrangeInvariant, -na*h, 1e-12)
+	approx.CheckPtr(t, "lagrange_invariant_mm", v.LagrangeInvariant, -na*h, approx.Rounding)
 }
 
 func TestZeroFieldStillGivesPupils(t *testing.T) {
 	const f, stopRadius, d = 100.0, 2.0, 50.0
 	p := newPath().thin("L", 60, f, 0).plane("STOP", d, stopRadius).path()
 	res := Analyze(collimated(10, 0), p, 0, Tangential)
+	// The pupil does not depend on the field: the Gaussian lens equation as in
+	// TestEntrancePupilOfStopBehindThinLens; with no field, no invariant and no image height.
 	if !res.UnitField {
 		t.Error("UnitField = false with only a zero field")
 	}
-	checkPtr(t, "entrance_pupil_mm", res.Values.EntrancePupilMM, f*d/(f-d), 1e-10)
-	checkPtr(t, "lagrange_invariant_mm", res.Values.LagrangeInvariant, 0, 0)
-	checkPtr(t, "image_height_mm", res.Values.ImageHeightMM, 0, 0)
+	approx.CheckPtr(t, "entrance_pupil_mm", res.Values.EntrancePupilMM, f*d/(f-d), tolImaging)
+	approx.CheckPtr(t, "lagrange_invariant_mm", res.Values.LagrangeInvariant, 0, 0)
+	approx.CheckPtr(t, "image_height_mm", res.Values.ImageHeightMM, 0, 0)
 }
 
 func TestAfocalHasNoFNumber(t *testing.T) {
@@ -187,6 +190,6 @@ func TestAfocalHasNoFNumber(t *testing.T) {
 	checkNil(t, "image_height_mm", res.Values.ImageHeightMM)
 	// The collimated beam of radius 5 leaves with radius 5·f2/f1 (beam expander ratio, from memory)
 	// and zero slope.
-	checkPtr(t, "image_na", res.Values.ImageNA, 0, tolRounding)
-	checkClose(t, "output beam radius", math.Abs(res.Marginal[1].Y), 5*25.0/100, tolRounding)
+	approx.CheckPtr(t, "image_na", res.Values.ImageNA, 0, approx.Rounding)
+	approx.Check(t, "output beam radius", math.Abs(res.Marginal[1].Y), 5*25.0/100, approx.Rounding)
 }

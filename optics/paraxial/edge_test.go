@@ -6,6 +6,7 @@ import (
 	"testing"
 
 	"raytable/optics"
+	"raytable/optics/internal/approx"
 )
 
 // finiteValues fails when a reported number is NaN or infinite: the report is JSON, which has
@@ -81,8 +82,8 @@ func TestTelecentricRelay(t *testing.T) {
 	if !v.Afocal || v.ApertureStop != "STOP" {
 		t.Fatalf("afocal %v stop %q, want afocal with STOP", v.Afocal, v.ApertureStop)
 	}
-	checkPtr(t, "magnification", v.Magnification, -0.5, 1e-12)
-	checkPtr(t, "image_distance_mm", v.ImageDistanceMM, 50, 1e-12)
+	approx.CheckPtr(t, "magnification", v.Magnification, -0.5, approx.Rounding)
+	approx.CheckPtr(t, "image_distance_mm", v.ImageDistanceMM, 50, approx.Rounding)
 	checkNil(t, "entrance_pupil_mm", v.EntrancePupilMM)
 	checkNil(t, "exit_pupil_mm", v.ExitPupilMM)
 }
@@ -97,7 +98,7 @@ func TestCardinalsAtEveryWavelength(t *testing.T) {
 	for k, n := range nByWavelength {
 		p1, p2 := (n-1)/r1, (1-n)/r2
 		c := Cardinals(b.path(), k, Tangential, nil)
-		checkPtr(t, "efl_mm", c.EFLMM, 1/(p1+p2-thick/n*p1*p2), tolRounding)
-		checkClose(t, "wavelength_nm", c.WavelengthNM, b.p.WavelengthsNM[k], 0)
+		approx.CheckPtr(t, "efl_mm", c.EFLMM, 1/(p1+p2-thick/n*p1*p2), approx.Rounding)
+		approx.Check(t, "wavelength_nm", c.WavelengthNM, b.p.WavelengthsNM[k], 0)
 	}
 }

@@ -135,27 +135,6 @@ func randomPath(rng *rand.Rand, elements int) *optics.Path {
 	return b.path()
 }
 
-// relClose reports whether got is within tol of want relative to max(|want|, floor).
-func relClose(got, want, tol, floor float64) bool {
-	return math.Abs(got-want) <= tol*math.Max(math.Abs(want), floor)
-}
-
-func checkClose(t *testing.T, name string, got, want, tol float64) {
-	t.Helper()
-	if !relClose(got, want, tol, 1) {
-		t.Errorf("%s = %.12g, want %.12g (tolerance %g)", name, got, want, tol)
-	}
-}
-
-func checkPtr(t *testing.T, name string, got *float64, want, tol float64) {
-	t.Helper()
-	if got == nil {
-		t.Errorf("%s = nil, want %.12g", name, want)
-		return
-	}
-	checkClose(t, name, *got, want, tol)
-}
-
 func checkNil(t *testing.T, name string, got *float64) {
 	t.Helper()
 	if got != nil {

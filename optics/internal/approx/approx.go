@@ -1,6 +1,7 @@
 // Package approx compares computed floating-point values with their references in tests, with
 // tolerances that have names. It follows the helpers of Go's own math tests (tolerance, close,
 // veryclose and alike in src/math/all_test.go) and is imported only by _test.go files under optics.
+// Check and CheckPtr report a failed comparison on a testing.TB, naming the quantity.
 //
 // Every comparison fails on NaN and on an infinity that the reference does not share, so that a
 // check cannot pass by accident where a hand-written `math.Abs(got-want) > tol` would: a NaN

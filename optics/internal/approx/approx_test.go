@@ -1,6 +1,7 @@
 package approx
 
 import (
+	"fmt"
 	"math"
 	"testing"
 )
@@ -62,6 +63,42 @@ func TestAlike(t *testing.T) {
 	for _, c := range cases {
 		if got := Alike(c.a, c.b); got != c.want {
 			t.Errorf("Alike(%v, %v) = %v, want %v", c.a, c.b, got, c.want)
+		}
+	}
+}
+
+// recorder is a testing.TB that keeps the errors reported to it.
+type recorder struct {
+	testing.TB
+	errors []string
+}
+
+func (r *recorder) Helper() {}
+func (r *recorder) Errorf(format string, args ...any) {
+	r.errors = append(r.errors, fmt.Sprintf(format, args...))
+}
+
+func TestCheck(t *testing.T) {
+	v := 2.0000001
+	cases := []struct {
+		name string
+		run  func(tb testing.TB)
+		want string // "" for no error
+	}{
+		{"inside", func(tb testing.TB) { Check(tb, "x", 2.0000001, 2, Close) }, ""},
+		{"outside", func(tb testing.TB) { Check(tb, "x", 2.00001, 2, Close) }, "x = 2.00001, want 2 (tolerance 1e-06)"},
+		{"NaN", func(tb testing.TB) { Check(tb, "x", math.NaN(), 2, Close) }, "x = NaN, want 2 (tolerance 1e-06)"},
+		{"pointer inside", func(tb testing.TB) { CheckPtr(tb, "p", &v, 2, Close) }, ""},
+		{"nil pointer", func(tb testing.TB) { CheckPtr(tb, "p", nil, 2, Close) }, "p = nil, want 2"},
+	}
+	for _, c := range cases {
+		r := &recorder{TB: t}
+		c.run(r)
+		switch {
+		case c.want == "" && len(r.errors) != 0:
+			t.Errorf("%s: errors %q, want none", c.name, r.errors)
+		case c.want != "" && (len(r.errors) != 1 || r.errors[0] != c.want):
+			t.Errorf("%s: errors %q, want [%q]", c.name, r.errors, c.want)
 		}
 	}
 }
