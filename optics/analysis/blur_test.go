@@ -3,11 +3,11 @@ package analysis
 import (
 	"encoding/json"
 	"fmt"
-	"math"
 	"strings"
 	"testing"
 
 	"raytable/optics"
+	"raytable/optics/internal/approx"
 )
 
 // singletBench is a collimated fan of radius h through a plano-convex fused-silica lens (f about
@@ -40,12 +40,13 @@ func TestBlurIdealLensAndAiryRadius(t *testing.T) {
 	bl := r.Blur[0]
 	// An ideal thin lens brings a collimated fan to one point at its focal plane (definition of
 	// the focal length; common practice): no spread beyond rounding.
-	if bl.Rays != 21 || bl.RMSMM > 1e-12 || bl.PeakMM > 1e-12 {
+	if bl.Rays != 21 || !approx.Abs(bl.RMSMM, 0, approx.Rounding) || !approx.Abs(bl.PeakMM, 0, approx.Rounding) {
 		t.Errorf("ideal lens: %d rays, rms %g, peak %g mm; want 21 rays on one point", bl.Rays, bl.RMSMM, bl.PeakMM)
 	}
-	// Airy radius 1.22·λ/(2·NA) (Born and Wolf, Principles of Optics, §8.5.2) at NA = 5/100.
+	// Airy radius 1.22·λ/(2·NA) (Born and Wolf, Principles of Optics, §8.5.2, section from
+	// memory) at NA = 5/100.
 	want := 1.22 * 632.8e-6 / (2 * 0.05)
-	if bl.AiryRadiusMM == nil || relErr(*bl.AiryRadiusMM, want) > 1e-9 {
+	if bl.AiryRadiusMM == nil || !approx.Rel(*bl.AiryRadiusMM, want, approx.VeryClose) {
 		t.Errorf("Airy radius %v, want %.6g mm", bl.AiryRadiusMM, want)
 	}
 }
@@ -54,16 +55,21 @@ func TestBlurIdealLensAndAiryRadius(t *testing.T) {
 // grows as the cube of the aperture (third-order, Seidel; Welford, Aberrations of Optical
 // Systems, 1986), so doubling the fan radius multiplies the blur by 8; and a plano-convex lens
 // with its curved face towards the collimated beam blurs about four times less than turned round
-// (common practice for orienting a singlet).
+// (common practice for orienting a singlet, from memory).
 func TestBlurSphericalAberration(t *testing.T) {
+	const (
+		cubeTol = 0.1 // fifth-order terms at h = 2 mm of f = 100 mm; 8.007 measured
+		// orientLo, orientHi bracket "about four": 3.69 measured at h = 5 mm.
+		orientLo, orientHi = 3.0, 5.0
+	)
 	small := singletBench(t, 1, true).Blur[0].RMSMM
 	large := singletBench(t, 2, true).Blur[0].RMSMM
-	if ratio := large / small; math.Abs(ratio-8) > 0.1 {
+	if ratio := large / small; !approx.Abs(ratio, 8, cubeTol) {
 		t.Errorf("blur ratio for twice the aperture = %.4f, want 8 (h³)", ratio)
 	}
 	good := singletBench(t, 5, true).Blur[0].RMSMM
 	bad := singletBench(t, 5, false).Blur[0].RMSMM
-	if ratio := bad / good; ratio < 3 || ratio > 5 {
+	if ratio := bad / good; !(ratio >= orientLo && ratio <= orientHi) {
 		t.Errorf("flat-first / curved-first blur = %.3f (%.4g / %.4g mm), want about 4", ratio, bad, good)
 	} else {
 		t.Logf("flat-first / curved-first blur = %.3f (%.4g / %.4g mm)", ratio, bad, good)

@@ -6,6 +6,7 @@ import (
 	"testing"
 
 	"raytable/optics"
+	"raytable/optics/internal/approx"
 )
 
 // sagittalLimit is the relative agreement of an exact focus found with rays 1 µm off the chief
@@ -19,7 +20,8 @@ const sagittalLimit = 1e-4
 // the paraxial sagittal focus and tangential rays (y only) y = 0 at the tangential one; a skew
 // ray (x and y) must do both, since to first order the two planes separate. The reference is the
 // paraxial report itself (system.bfl_mm and system.sagittal.bfl_mm), which Coddington's
-// f·cos i and f/cos i (Coddington 1829, as issue 2 states them) pin independently.
+// f·cos i and f/cos i (Coddington 1829, as README, 'Report, format raytable/report/v1', states
+// them) pin independently.
 func TestTiltedMirrorExactFociMatchParaxial(t *testing.T) {
 	const r, turn, h = 200.0, 120.0, 1e-3
 	cosI := math.Cos((180 - turn) / 2 * math.Pi / 180)
@@ -38,7 +40,7 @@ func TestTiltedMirrorExactFociMatchParaxial(t *testing.T) {
 				sag := value(t, "sagittal bfl_mm", rep.System.Sagittal.BFLMM)
 				tan := value(t, "bfl_mm", rep.System.BFLMM)
 				// Coddington: f/cos i sagittal, f·cos i tangential, f = R/2.
-				if relErr(sag, r/2/cosI) > veryClose || relErr(tan, r/2*cosI) > veryClose {
+				if !approx.Rel(sag, r/2/cosI, approx.VeryClose) || !approx.Rel(tan, r/2*cosI, approx.VeryClose) {
 					t.Fatalf("paraxial foci: sagittal %.9g, tangential %.9g; Coddington %.9g and %.9g", sag, tan, r/2/cosI, r/2*cosI)
 				}
 				at := func(i int) optics.ExactPoint {
@@ -63,7 +65,7 @@ func TestTiltedMirrorExactFociMatchParaxial(t *testing.T) {
 					{"skew rays cross y = 0", (crossY(at(4)) + crossY(at(5))) / 2, tan},
 				}
 				for _, c := range checks {
-					if relErr(c.got, c.want) > sagittalLimit {
+					if !approx.Rel(c.got, c.want, sagittalLimit) {
 						t.Errorf("%s %.8g mm after the mirror, paraxial focus %.8g mm", c.what, c.got, c.want)
 					}
 				}

@@ -10,6 +10,7 @@ import (
 	"testing"
 
 	"raytable/optics"
+	"raytable/optics/internal/approx"
 	"raytable/optics/paraxial"
 )
 
@@ -40,14 +41,6 @@ func rowOf(t *testing.T, r *optics.Report, id string) optics.SpacingTolerance {
 	return optics.SpacingTolerance{}
 }
 
-func wantNear(t *testing.T, name string, got *float64, want, tol float64) {
-	t.Helper()
-	g := value(t, name, got)
-	if math.Abs(g-want) > tol*math.Max(1, math.Abs(want)) {
-		t.Errorf("%s = %.10g, want %.10g", name, g, want)
-	}
-}
-
 // TestSpacingPointSourceThinLens images a point at distance s through a thin lens f onto a screen
 // at the image. Moving the lens by δ with the screen gap fixed changes s by δ: the image moves by
 // δ (the lens) plus ds'/ds·δ = -m²·δ (longitudinal magnification, Hecht, Optics, sec. 5.2.3, from
@@ -69,20 +62,20 @@ func TestSpacingPointSourceThinLens(t *testing.T) {
 			// Image-side NA: the marginal slope scales by s/s' (paraxial Lagrange invariant with a
 			// zero-height object, Born and Wolf, sec. 4.4, from memory).
 			naImg := na * tc.s / sImg
-			wantNear(t, "image_na", r.SpacingBasis.ImageNA, naImg, veryClose)
+			approx.CheckPtr(t, "image_na", r.SpacingBasis.ImageNA, naImg, approx.VeryClose)
 			// Rayleigh's quarter-wave depth of focus λ/(2 NA'²) (Born and Wolf, sec. 8.8, from memory).
 			dof := lambdaHeNeMM / (2 * naImg * naImg)
-			wantNear(t, "depth_of_focus_mm", r.SpacingBasis.DepthOfFocusMM, dof, veryClose)
+			approx.CheckPtr(t, "depth_of_focus_mm", r.SpacingBasis.DepthOfFocusMM, dof, approx.VeryClose)
 
 			lens := rowOf(t, r, "L")
-			wantNear(t, "L defocus_per_mm", lens.DefocusPerMM, -m*m, derivClose)
-			wantNear(t, "L image_shift_per_mm", lens.ImageShiftPerMM, 1-m*m, derivClose)
-			wantNear(t, "L tolerance_mm", lens.ToleranceMM, dof/(m*m), derivClose)
+			approx.CheckPtr(t, "L defocus_per_mm", lens.DefocusPerMM, -m*m, derivClose)
+			approx.CheckPtr(t, "L image_shift_per_mm", lens.ImageShiftPerMM, 1-m*m, derivClose)
+			approx.CheckPtr(t, "L tolerance_mm", lens.ToleranceMM, dof/(m*m), derivClose)
 
 			cam := rowOf(t, r, "CAM")
-			wantNear(t, "CAM defocus_per_mm", cam.DefocusPerMM, -1, derivClose)
-			wantNear(t, "CAM image_shift_per_mm", cam.ImageShiftPerMM, 0, zeroSens)
-			wantNear(t, "CAM tolerance_mm", cam.ToleranceMM, dof, derivClose)
+			approx.CheckPtr(t, "CAM defocus_per_mm", cam.DefocusPerMM, -1, derivClose)
+			approx.CheckPtr(t, "CAM image_shift_per_mm", cam.ImageShiftPerMM, 0, zeroSens)
+			approx.CheckPtr(t, "CAM tolerance_mm", cam.ToleranceMM, dof, derivClose)
 			if lens.DivergencePerMM != nil || cam.DivergencePerMM != nil {
 				t.Error("divergence given for a finite image")
 			}
@@ -99,17 +92,17 @@ func TestSpacingCollimatedThinLens(t *testing.T) {
 	r := mustRun(t, spacingBench(`"kind":"collimated","semi_diameter_mm":2`,
 		`{"id":"L","type":"thin-lens","gap_mm":50,"focal_mm":100},{"id":"CAM","type":"screen","gap_mm":100}`))
 	dof := lambdaHeNeMM / (2 * (y / f) * (y / f)) // Born and Wolf, sec. 8.8, from memory
-	wantNear(t, "depth_of_focus_mm", r.SpacingBasis.DepthOfFocusMM, dof, veryClose)
+	approx.CheckPtr(t, "depth_of_focus_mm", r.SpacingBasis.DepthOfFocusMM, dof, approx.VeryClose)
 
 	lens := rowOf(t, r, "L")
-	wantNear(t, "L defocus_per_mm", lens.DefocusPerMM, 0, zeroSens)
-	wantNear(t, "L image_shift_per_mm", lens.ImageShiftPerMM, 1, derivClose)
+	approx.CheckPtr(t, "L defocus_per_mm", lens.DefocusPerMM, 0, zeroSens)
+	approx.CheckPtr(t, "L image_shift_per_mm", lens.ImageShiftPerMM, 1, derivClose)
 	if lens.ToleranceMM != nil {
 		t.Errorf("L tolerance %g, want null: the lens gap does not defocus", *lens.ToleranceMM)
 	}
 	cam := rowOf(t, r, "CAM")
-	wantNear(t, "CAM defocus_per_mm", cam.DefocusPerMM, -1, derivClose)
-	wantNear(t, "CAM tolerance_mm", cam.ToleranceMM, dof, derivClose)
+	approx.CheckPtr(t, "CAM defocus_per_mm", cam.DefocusPerMM, -1, derivClose)
+	approx.CheckPtr(t, "CAM tolerance_mm", cam.ToleranceMM, dof, derivClose)
 }
 
 // TestSpacingKeplerianExpander: thin lenses f1 and f2 at f1 + f2 + ε, collimated input of radius
@@ -129,18 +122,18 @@ func TestSpacingKeplerianExpander(t *testing.T) {
 		t.Fatalf("basis %q, want %q for an afocal expander", b.Kind, optics.SpacingDiffractionAngle)
 	}
 	w := y * f2 / f1
-	wantNear(t, "output_radius_mm", b.OutputRadiusMM, w, veryClose)
-	wantNear(t, "divergence_rad", b.DivergenceRad, lambdaHeNeMM/(math.Pi*w), veryClose) // Gaussian far-field half-angle, common practice
+	approx.CheckPtr(t, "output_radius_mm", b.OutputRadiusMM, w, approx.VeryClose)
+	approx.CheckPtr(t, "divergence_rad", b.DivergenceRad, lambdaHeNeMM/(math.Pi*w), approx.VeryClose) // Gaussian far-field half-angle, common practice
 
 	l2 := rowOf(t, r, "L2")
-	wantNear(t, "L2 divergence_per_mm", l2.DivergencePerMM, y/(f1*f2), derivClose)
-	wantNear(t, "L2 tolerance_mm", l2.ToleranceMM, lambdaHeNeMM*f1*f1/(math.Pi*y*y), derivClose)
+	approx.CheckPtr(t, "L2 divergence_per_mm", l2.DivergencePerMM, y/(f1*f2), derivClose)
+	approx.CheckPtr(t, "L2 tolerance_mm", l2.ToleranceMM, lambdaHeNeMM*f1*f1/(math.Pi*y*y), derivClose)
 	if l2.DefocusPerMM != nil || l2.ImageShiftPerMM != nil {
 		t.Error("defocus given for a collimated output")
 	}
 	for _, id := range []string{"L1", "CAM"} {
 		row := rowOf(t, r, id)
-		wantNear(t, id+" divergence_per_mm", row.DivergencePerMM, 0, zeroSens)
+		approx.CheckPtr(t, id+" divergence_per_mm", row.DivergencePerMM, 0, zeroSens)
 		if row.ToleranceMM != nil {
 			t.Errorf("%s tolerance %g, want null", id, *row.ToleranceMM)
 		}
@@ -156,7 +149,7 @@ func TestSpacingStopsAtDump(t *testing.T) {
 	if len(r.Spacing) != 2 || r.Spacing[1].ID != "D" || r.SpacingBasis.Reference != "D" {
 		t.Fatalf("rows %+v, reference %q; want L and D, reference D", r.Spacing, r.SpacingBasis.Reference)
 	}
-	wantNear(t, "D defocus_per_mm", r.Spacing[1].DefocusPerMM, -1, derivClose) // only the dump moves
+	approx.CheckPtr(t, "D defocus_per_mm", r.Spacing[1].DefocusPerMM, -1, derivClose) // only the dump moves
 }
 
 // TestSpacingWithoutOptics: with no lens, thin lens or mirror no gap changes the light; the table
@@ -225,9 +218,9 @@ func TestSpacingDemo(t *testing.T) {
 	}
 	// The basis agrees with the system's own NA (self-consistency).
 	na := value(t, "system.image_na", r.System.ImageNA)
-	wantNear(t, "depth_of_focus_mm", r.SpacingBasis.DepthOfFocusMM, lambdaHeNeMM/(2*na*na), veryClose)
+	approx.CheckPtr(t, "depth_of_focus_mm", r.SpacingBasis.DepthOfFocusMM, lambdaHeNeMM/(2*na*na), approx.VeryClose)
 	for _, id := range []string{"M2", "CAM"} {
-		wantNear(t, id+" defocus_per_mm", rowOf(t, r, id).DefocusPerMM, -1, derivClose)
+		approx.CheckPtr(t, id+" defocus_per_mm", rowOf(t, r, id).DefocusPerMM, -1, derivClose)
 	}
 
 	var n float64
@@ -239,7 +232,7 @@ func TestSpacingDemo(t *testing.T) {
 	fL2 := 68.6 / (n - 1)
 	m := 250 / fL2
 	for _, id := range []string{"PH", "L2"} {
-		wantNear(t, id+" defocus_per_mm", rowOf(t, r, id).DefocusPerMM, -m*m, demoAfocal)
+		approx.CheckPtr(t, id+" defocus_per_mm", rowOf(t, r, id).DefocusPerMM, -m*m, demoAfocal)
 	}
 
 	tightest := math.Inf(1)
@@ -248,7 +241,7 @@ func TestSpacingDemo(t *testing.T) {
 			tightest = math.Min(tightest, *row.ToleranceMM)
 		}
 	}
-	if l2 := rowOf(t, r, "L2").ToleranceMM; l2 == nil || relErr(*l2, tightest) > veryClose {
+	if l2 := rowOf(t, r, "L2").ToleranceMM; l2 == nil || !approx.Rel(*l2, tightest, approx.VeryClose) {
 		t.Errorf("L2 tolerance %s is not the tightest, %g mm", fmtPtr(l2), tightest)
 	}
 	if testing.Verbose() {
