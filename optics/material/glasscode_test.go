@@ -5,6 +5,8 @@ import (
 	"math"
 	"strings"
 	"testing"
+
+	"raytable/optics/internal/approx"
 )
 
 // The model must reproduce the two numbers it was given: n(d) = nd and nF - nC = (nd-1)/vd
@@ -30,14 +32,14 @@ func TestGlassCodeRoundTrip(t *testing.T) {
 			if g.ND != tc.nd || g.VD != tc.vd {
 				t.Fatalf("parsed nd %v vd %v, want %v %v (nd = 1 + NNN/1000, vd = MMM/10)", g.ND, g.VD, tc.nd, tc.vd)
 			}
-			if got := g.Index(DLineNM); math.Abs(got-tc.nd) > tolIdentical {
+			if got := g.Index(DLineNM); !approx.Abs(got, tc.nd, approx.Rounding) {
 				t.Errorf("n(d) = %.15f, want nd = %v", got, tc.nd)
 			}
 			wantSpread := (tc.nd - 1) / tc.vd // Abbe number definition
-			if got := g.Index(FLineNM) - g.Index(CLineNM); math.Abs(got-wantSpread) > tolIdentical {
+			if got := g.Index(FLineNM) - g.Index(CLineNM); !approx.Abs(got, wantSpread, approx.Rounding) {
 				t.Errorf("nF - nC = %.15f, want (nd-1)/vd = %.15f", got, wantSpread)
 			}
-			if got := AbbeNumber(g); math.Abs(got-tc.vd) > 1e-9 {
+			if got := AbbeNumber(g); !approx.Abs(got, tc.vd, approx.VeryClose) { // vd from three indices
 				t.Errorf("AbbeNumber = %v, want %v", got, tc.vd)
 			}
 			if got := g.Code(); got != tc.code {
@@ -61,7 +63,7 @@ func TestGlassCodeApproximatesFusedSilica(t *testing.T) {
 	fs, _ := Builtin(FusedSilica)
 	offset := fs.Index(DLineNM) - g.Index(DLineNM)
 	for _, wl := range []float64{420, 450, 500, 550, 600, 650, 700, 750} {
-		if diff := fs.Index(wl) - (g.Index(wl) + offset); math.Abs(diff) > tolCauchyVisible {
+		if diff := fs.Index(wl) - (g.Index(wl) + offset); !approx.Abs(diff, 0, tolCauchyVisible) {
 			t.Errorf("at %v nm Sellmeier - Cauchy = %.2e, want within %g", wl, diff, tolCauchyVisible)
 		}
 	}
@@ -140,7 +142,7 @@ func FuzzParseGlassCode(f *testing.F) {
 			}
 			return
 		}
-		if n := g.Index(DLineNM); math.Abs(n-g.ND) > tolIdentical {
+		if n := g.Index(DLineNM); !approx.Abs(n, g.ND, approx.Rounding) {
 			t.Fatalf("%q: n(d) = %v, want %v", s, n, g.ND)
 		}
 	})
