@@ -198,7 +198,7 @@ func TestDecodeInvalidInline(t *testing.T) {
 	}
 }
 
-// TestDecodeMessages pins the wording of the messages that the issue and the web page quote.
+// TestDecodeMessages pins the wording of the messages the web page shows; README ('Bench file') quotes the first.
 func TestDecodeMessages(t *testing.T) {
 	cases := []struct {
 		file, path, message string
@@ -357,7 +357,7 @@ func BenchmarkDecode(b *testing.B) {
 }
 
 // TestBeamDefaults: a beam given by its waist radius alone has its waist at the source and
-// M² 1 (issue 2's bench format: waist_at_mm defaults to 0, m2 to 1).
+// M² 1 (README, 'Bench file, format raytable/bench/v1': waist_at_mm defaults to 0, m2 to 1).
 func TestBeamDefaults(t *testing.T) {
 	b, err := Decode([]byte(validBench(`{"x_mm": 0, "y_mm": 0, "heading_deg": 0, "kind": "point", "na": 0.1, "beam": {"waist_radius_mm": 0.5}}`, "")))
 	if err != nil {

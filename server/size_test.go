@@ -5,7 +5,7 @@ import (
 	"testing"
 )
 
-// maxPageBytes is the budget of the bench page of the demo with its inline SVGs (issue 3).
+// maxPageBytes is the budget of the bench page of the demo with its inline SVGs (our own number).
 const maxPageBytes = 300 << 10
 
 // TestDemoPageSize keeps the demo's bench page, diagrams included, under the budget, and logs the

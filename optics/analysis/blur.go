@@ -43,7 +43,7 @@ func blurs(b *optics.Bench, r *optics.Report) []optics.Blur {
 }
 
 // airyRadiusMM is the radius of the first dark ring of a perfect image, 1.22·λ/(2·NA) (Airy 1835;
-// Born and Wolf, Principles of Optics, §8.5.2).
+// Born and Wolf, Principles of Optics, §8.5.2, section from memory).
 func airyRadiusMM(wavelengthNM, na float64) float64 {
 	return 0.61 * wavelengthNM * 1e-6 / na
 }

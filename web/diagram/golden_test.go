@@ -96,7 +96,7 @@ func TestGoldenDemo(t *testing.T) {
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {
 			got := c.draw()
-			// The bench page carries a side and a table view and stays under 300 KB (issue 3);
+			// The bench page carries a side and a table view and stays under 300 KB (server TestDemoPageSize);
 			// our budget is 80 KB per drawing.
 			if c.name != "plan-demo.svg" && len(got) > 80_000 {
 				t.Errorf("%s is %d bytes, over the 80 KB budget", c.name, len(got))
