@@ -9,7 +9,7 @@ import (
 const maxPageBytes = 300 << 10
 
 // TestDemoPageSize keeps the demo's bench page, diagrams included, under the budget, and logs the
-// size of each part for the closing note (go test -v -run TestDemoPageSize).
+// size of each part (go test -v -run TestDemoPageSize).
 func TestDemoPageSize(t *testing.T) {
 	ts := newTestServer(t)
 	id := ts.startDemo(t)
