@@ -46,9 +46,10 @@ func TestTiltedConcaveMirror(t *testing.T) {
 	}
 }
 
-// The list's conventions: one entry when t and s coincide; a waist on an element's plane belongs to
-// the gap ending there (after = the element before it, null before the first); none upstream of the
-// source, inside glass, virtual or beyond the last element.
+// The list's conventions (README, 'Report, format raytable/report/v1', beam.waists): one entry
+// when t and s coincide; a waist on an element's plane belongs to the gap ending there (after =
+// the element before it, null before the first); none upstream of the source, inside glass,
+// virtual or beyond the last element.
 func TestWaistConventions(t *testing.T) {
 	type want struct {
 		after  string // "" = null

@@ -66,7 +66,7 @@ func TestRaysPointSource(t *testing.T) {
 	if len(rs) != 6 {
 		t.Fatalf("%d rays, want 2 heights × 3", len(rs))
 	}
-	top := rs[5] // height 1.5, pupil +1: the marginal ray leaves at asin(NA), paraxial u = NA
+	top := rs[5] // height 1.5, pupil +1: the marginal ray leaves at asin(NA) (NA = n sin θ, n = 1), paraxial u = NA
 	if top.Field != "1.5 mm" || top.Name != "fan 1.5mm 780nm 2" || top.Pupil != 1 {
 		t.Errorf("last ray %+v", top)
 	}

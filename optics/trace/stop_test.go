@@ -81,8 +81,9 @@ func TestRayMissesSteepSphere(t *testing.T) {
 func TestRayBeyondRimMisses(t *testing.T) {
 	const radius = 5.0
 	p := path(face(10, 1/radius, 1.5), face(20, 0, 1))
-	// The line y = 36 - 2z meets the sphere (centre z = 15) at z = 15.51 and 19.29, both behind
-	// the centre plane, where the face does not exist.
+	// The line y = 36 - 2z meets the sphere (centre z = 15) where 5z² - 174z + 1496 = 0, at
+	// z = 15.51 and 19.29 (solved by hand), both behind the centre plane, where the face does not
+	// exist.
 	r := Trace(p, 0, Start{Pos: Vec{0, 36, 0}, Dir: Unit(Vec{0, -2, 1})}, nil)
 	if r.Status != optics.RayMissed || r.Surface != 0 {
 		t.Fatalf("%s at %d (%s), want missed at 0", r.Status, r.Surface, r.Reason)
