@@ -51,3 +51,15 @@ func headingOf(v r2.Vec) float64 { return NormDeg(math.Atan2(v.Y, v.X) * 180 / m
 func along(p r2.Vec, deg, d float64) r2.Vec { return r2.Add(p, r2.Scale(d, unitDeg(deg))) }
 
 func finite(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }
+
+func finiteVec(v r2.Vec) bool { return finite(v.X) && finite(v.Y) }
+
+// unitOr is v scaled to length 1, or fallback when v has no usable direction (shorter than 1e-12
+// mm, or not finite).
+func unitOr(v, fallback r2.Vec) r2.Vec {
+	n := r2.Norm(v)
+	if n < 1e-12 || !finite(n) {
+		return fallback
+	}
+	return r2.Scale(1/n, v)
+}
