@@ -3,23 +3,13 @@ package analysis
 import (
 	"bytes"
 	"encoding/json"
-	"os"
 	"testing"
-
-	"raytable/optics"
 )
 
 // TestDemoBoard: the analysis lays out the board from the report it computed, once, and keeps it
 // out of the report's JSON.
 func TestDemoBoard(t *testing.T) {
-	data, err := os.ReadFile("../../testdata/demo-bench.json")
-	if err != nil {
-		t.Fatal(err)
-	}
-	b, err := optics.Decode(data)
-	if err != nil {
-		t.Fatal(err)
-	}
+	b := loadDemo(t)
 	r, err := Run(b)
 	if err != nil {
 		t.Fatal(err)

@@ -2,6 +2,7 @@ package layout
 
 import (
 	"math"
+	"sort"
 
 	"gonum.org/v1/gonum/spatial/r2"
 
@@ -86,17 +87,22 @@ func (fp foldedPath) bands(samples []optics.BeamSample) [][]r2.Vec {
 	if len(clean) < 2 {
 		return nil
 	}
+	// after is the index of the first clean sample beyond s (len(clean) when there is none); the
+	// samples are in path order, so it is a binary search.
+	after := func(s float64) int {
+		return sort.Search(len(clean), func(k int) bool { return clean[k].PathMM > s })
+	}
 	wAt := func(s float64) float64 {
-		for k := 1; k < len(clean); k++ {
-			if s <= clean[k].PathMM {
-				a, b := clean[k-1], clean[k]
-				if b.PathMM-a.PathMM < 1e-12 {
-					return b.WTMM
-				}
-				return a.WTMM + (b.WTMM-a.WTMM)*(s-a.PathMM)/(b.PathMM-a.PathMM)
-			}
+		// The first sample from index 1 on at or beyond s closes the piece holding s.
+		k := max(1, sort.Search(len(clean), func(k int) bool { return s <= clean[k].PathMM }))
+		if k == len(clean) {
+			return clean[len(clean)-1].WTMM
 		}
-		return clean[len(clean)-1].WTMM
+		a, b := clean[k-1], clean[k]
+		if b.PathMM-a.PathMM < 1e-12 {
+			return b.WTMM
+		}
+		return a.WTMM + (b.WTMM-a.WTMM)*(s-a.PathMM)/(b.PathMM-a.PathMM)
 	}
 	lo, hi := clean[0].PathMM, clean[len(clean)-1].PathMM
 	var out [][]r2.Vec
@@ -111,10 +117,11 @@ func (fp foldedPath) bands(samples []optics.BeamSample) [][]r2.Vec {
 			continue
 		}
 		ss := []float64{a}
-		for _, c := range clean {
-			if c.PathMM > a && c.PathMM < b {
-				ss = append(ss, c.PathMM)
+		for _, c := range clean[after(a):] {
+			if c.PathMM >= b {
+				break
 			}
+			ss = append(ss, c.PathMM)
 		}
 		ss = append(ss, b)
 		n := perp(fp.dir(i))
