@@ -136,10 +136,11 @@ func flaggedMounts(r *optics.Report) map[string]bool {
 	return flagged
 }
 
-// elements pairs the report's elements with their places on the board.
+// elements is how many of the report's elements have a place on the board, index for index (all
+// of them on a board laid out for the report).
 func (t *tableScene) elements() int { return min(len(t.r.Elements), len(t.board.Elements)) }
 
-// mounts pairs the report's placements with their footprints on the board.
+// mounts is how many of the report's placements have a footprint on the board, index for index.
 func (t *tableScene) mounts() int { return min(len(t.r.Placement), len(t.board.Mounts)) }
 
 // position finds an element's table position by id: the element's first vertex, else its post.

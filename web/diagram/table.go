@@ -10,7 +10,7 @@ import (
 type TableOptions struct {
 	WidthPX int     // 0: 960 when fitting; with MMPerPX the width follows the table
 	MMPerPX float64 // 0: fit the table to the width; otherwise a fixed scale shared by several drawings
-	Title   string  // "" uses the bench's title
+	Title   string  // "" uses the report's title
 }
 
 const (
