@@ -26,6 +26,9 @@ type Report struct {
 	// against. Both are at the primary wavelength in the tangential plane.
 	Spacing      []SpacingTolerance `json:"spacing"`
 	SpacingBasis SpacingBasis       `json:"spacing_basis"`
+
+	// Board is the table seen from above as the drawings show it (see Board); not in the JSON.
+	Board *Board `json:"-"`
 }
 
 // MediumIndex is the index of one medium used on the bench at one wavelength.

@@ -73,7 +73,7 @@ func (s *Server) revResult(d design, o view.DrawOptions) (view.Result, error) {
 		return view.Result{}, err
 	}
 	return memo(s.cache, d.rev.ID, artifact{kind: artResult, opts: o}, func() (view.Result, error) {
-		return view.NewResult(d.bench, rep, o), nil
+		return view.NewResult(rep, o), nil
 	})
 }
 
@@ -93,9 +93,9 @@ func (s *Server) revSVG(d design, kind string, paraxial bool) ([]byte, error) {
 		case artSideSVG:
 			return diagram.Side(rep, a.opts.Side(rep)), nil
 		case artTableSVG:
-			return diagram.Table(d.bench, rep, view.PageDrawing.Table()), nil
+			return diagram.Table(rep, view.PageDrawing.Table()), nil
 		case artPlanSVG:
-			return diagram.Plan(d.bench, rep), nil
+			return diagram.Plan(rep), nil
 		}
 		return nil, optics.Errorf(optics.EInternal, "no drawing named %q", kind)
 	})

@@ -208,7 +208,7 @@ func (s *Server) preview(w http.ResponseWriter, r *http.Request) {
 			s.fail(w, r, err)
 			return
 		}
-		res = view.NewResult(b, rep, view.PageDrawing)
+		res = view.NewResult(rep, view.PageDrawing)
 	}
 	s.render(w, r, status, view.ResultFragment(res))
 }

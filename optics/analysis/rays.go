@@ -4,6 +4,8 @@ import (
 	"fmt"
 	"math"
 
+	"gonum.org/v1/gonum/spatial/r3"
+
 	"raytable/optics"
 	"raytable/optics/paraxial"
 	"raytable/optics/trace"
@@ -90,7 +92,7 @@ func stopMessage(e *optics.Element, status string, n, total int) string {
 	}
 }
 
-func vec(v trace.Vec) [3]float64 { return [3]float64{v.X, v.Y, v.Z} }
+func vec(v r3.Vec) [3]float64 { return [3]float64{v.X, v.Y, v.Z} }
 
 // num formats a length compactly: 25.4, 0.04, 150.
 func num(v float64) string { return fmt.Sprintf("%.4g", v) }

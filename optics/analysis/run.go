@@ -45,6 +45,7 @@ func Run(b *optics.Bench) (*optics.Report, error) {
 	r.Holes = layout.Holes(b.Table).HoleGrid
 	var planWarnings []optics.Warning
 	r.Placement, planWarnings = layout.Plan(b, r.Elements, beamRadius(r, b))
+	r.Board = layout.NewBoard(b.Table, b.Source, r)
 	r.Warnings = append(r.Warnings, planWarnings...)
 	r.Warnings = append(r.Warnings, screenWarnings(b, r)...)
 	r.Blur = blurs(b, r)

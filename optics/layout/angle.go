@@ -1,6 +1,10 @@
 package layout
 
-import "math"
+import (
+	"math"
+
+	"gonum.org/v1/gonum/spatial/r2"
+)
 
 // NormDeg brings a heading into [0, 360).
 func NormDeg(h float64) float64 {
@@ -31,19 +35,31 @@ func sincosDeg(deg float64) (s, c float64) {
 	return math.Sincos(d * math.Pi / 180)
 }
 
-// Point is a position on the table in millimetres.
-type Point struct {
-	X float64 `json:"x_mm"`
-	Y float64 `json:"y_mm"`
-}
+// Positions and directions on the table are gonum's r2.Vec in millimetres (X along the width, Y
+// along the depth); the free functions below add what r2 leaves out.
 
-func (p Point) add(q Point) Point         { return Point{p.X + q.X, p.Y + q.Y} }
-func (p Point) sub(q Point) Point         { return Point{p.X - q.X, p.Y - q.Y} }
-func (p Point) scale(s float64) Point     { return Point{p.X * s, p.Y * s} }
-func (p Point) dot(q Point) float64       { return p.X*q.X + p.Y*q.Y }
-func (p Point) norm() float64             { return math.Hypot(p.X, p.Y) }
-func unitDeg(deg float64) Point           { s, c := sincosDeg(deg); return Point{c, s} }
-func (p Point) perp() Point               { return Point{-p.Y, p.X} } // 90° counter-clockwise
-func headingOf(p Point) float64           { return NormDeg(math.Atan2(p.Y, p.X) * 180 / math.Pi) }
-func finite(v float64) bool               { return !math.IsNaN(v) && !math.IsInf(v, 0) }
-func along(p Point, deg, d float64) Point { return p.add(unitDeg(deg).scale(d)) }
+// unitDeg is the unit vector of a heading in degrees, exact along the table's axes.
+func unitDeg(deg float64) r2.Vec { s, c := sincosDeg(deg); return r2.Vec{X: c, Y: s} }
+
+// perp turns v by 90° counter-clockwise seen from above.
+func perp(v r2.Vec) r2.Vec { return r2.Vec{X: -v.Y, Y: v.X} }
+
+// headingOf is the heading of v in degrees, in [0, 360).
+func headingOf(v r2.Vec) float64 { return NormDeg(math.Atan2(v.Y, v.X) * 180 / math.Pi) }
+
+// along is the point d millimetres from p along heading deg.
+func along(p r2.Vec, deg, d float64) r2.Vec { return r2.Add(p, r2.Scale(d, unitDeg(deg))) }
+
+func finite(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }
+
+func finiteVec(v r2.Vec) bool { return finite(v.X) && finite(v.Y) }
+
+// unitOr is v scaled to length 1, or fallback when v has no usable direction (shorter than 1e-12
+// mm, or not finite).
+func unitOr(v, fallback r2.Vec) r2.Vec {
+	n := r2.Norm(v)
+	if n < 1e-12 || !finite(n) {
+		return fallback
+	}
+	return r2.Scale(1/n, v)
+}

@@ -7,5 +7,6 @@
 // Coordinates are table millimetres: x along the width, y along the depth, origin at the front-left
 // corner; headings in degrees, 0 = +x, 90 = +y, counter-clockwise seen from above, reported in
 // [0, 360). The package is pure computation and does no I/O; PlacementRows gives the placement list
-// as text cells for the command line to write as CSV.
+// as text cells for the command line to write as CSV, and NewBoard lays out the board the drawings
+// show from a report's positions.
 package layout

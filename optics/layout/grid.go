@@ -9,7 +9,7 @@ import (
 // Grid is a breadboard's hole pattern as the report carries it (holes every PitchMM in both
 // directions, the first one OffsetMM from the front and the left edge, Columns across the width
 // and Rows along the depth, every hole centre strictly inside the table), with the hole geometry
-// built on it.
+// built on it; a hole's centre is optics.HoleGrid.Hole.
 type Grid struct{ optics.HoleGrid }
 
 // Common practice for optical breadboards: metric tables have M6 holes on a 25 mm pitch, imperial
@@ -21,6 +21,24 @@ const (
 	imperialPitchMM  = 25.4
 	imperialOffsetMM = 12.7
 )
+
+// Hole radii: half the nominal diameter of the thread (common practice: M6 is 6 mm, 1/4-20 is
+// 1/4 in = 6.35 mm).
+const (
+	metricHoleRadiusMM   = 3.0
+	imperialHoleRadiusMM = 3.175
+)
+
+// holeRadiusMM is the radius of the holes of a grid kind; 0 for a table without a known grid.
+func holeRadiusMM(kind string) float64 {
+	switch kind {
+	case optics.GridMetric25:
+		return metricHoleRadiusMM
+	case optics.GridImperial1:
+		return imperialHoleRadiusMM
+	}
+	return 0
+}
 
 // Holes describes the hole grid of a table; a table without a grid (or with an unknown grid name,
 // or without a usable size) has no columns and no rows.
@@ -54,12 +72,6 @@ func holeCount(sizeMM, offsetMM, pitchMM float64) int {
 	return n
 }
 
-// Hole returns the centre of the hole in column col and row row, both counted from 1 at the
-// front-left corner.
-func (g Grid) Hole(col, row int) (x, y float64) {
-	return g.OffsetMM + float64(col-1)*g.PitchMM, g.OffsetMM + float64(row-1)*g.PitchMM
-}
-
 // Nearest returns the hole of the grid nearest to (x, y): column and row counted from 1 at the
 // front-left corner, and the hole's centre. On a rectangular grid the nearest hole is the nearest
 // column together with the nearest row, so a point off the table gets the nearest edge hole.
@@ -70,8 +82,8 @@ func (g Grid) Nearest(x, y float64) (col, row int, hx, hy float64, ok bool) {
 	}
 	col = nearestIndex(x, g.OffsetMM, g.PitchMM, g.Columns)
 	row = nearestIndex(y, g.OffsetMM, g.PitchMM, g.Rows)
-	hx, hy = g.Hole(col, row)
-	return col, row, hx, hy, true
+	h := g.Hole(col, row)
+	return col, row, h.X, h.Y, true
 }
 
 func nearestIndex(v, offsetMM, pitchMM float64, n int) int {

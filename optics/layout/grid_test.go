@@ -38,9 +38,9 @@ func TestHoles(t *testing.T) {
 			if g.Columns == 0 {
 				return
 			}
-			x, y := g.Hole(g.Columns, g.Rows)
-			if !near(x, c.lastX, posTolMM) || !near(y, c.lastY, posTolMM) {
-				t.Errorf("last hole at (%g, %g), want (%g, %g)", x, y, c.lastX, c.lastY)
+			h := g.Hole(g.Columns, g.Rows)
+			if !near(h.X, c.lastX, posTolMM) || !near(h.Y, c.lastY, posTolMM) {
+				t.Errorf("last hole at (%g, %g), want (%g, %g)", h.X, h.Y, c.lastX, c.lastY)
 			}
 		})
 	}

@@ -3,6 +3,8 @@ package layout
 import (
 	"math"
 
+	"gonum.org/v1/gonum/spatial/r2"
+
 	"raytable/optics"
 )
 
@@ -66,14 +68,14 @@ func MountOf(e *optics.Element) optics.Mount {
 
 // Footprint is the rectangle a mount covers on the table. Its centre is where the post stands.
 type Footprint struct {
-	Index   int      `json:"index"` // element index in the bench
-	ID      string   `json:"id"`
-	Type    string   `json:"type"`
-	Center  Point    `json:"center"`
-	WidthMM float64  `json:"width_mm"` // across AxisDeg
-	DepthMM float64  `json:"depth_mm"` // along AxisDeg
-	AxisDeg float64  `json:"axis_deg"` // direction of the depth axis, [0, 360)
-	Corners [4]Point `json:"corners"`  // counter-clockwise from the back-right corner
+	Index   int       `json:"index"` // element index in the bench
+	ID      string    `json:"id"`
+	Type    string    `json:"type"`
+	Center  r2.Vec    `json:"center"`
+	WidthMM float64   `json:"width_mm"` // across AxisDeg
+	DepthMM float64   `json:"depth_mm"` // along AxisDeg
+	AxisDeg float64   `json:"axis_deg"` // direction of the depth axis, [0, 360)
+	Corners [4]r2.Vec `json:"corners"`  // counter-clockwise from the back-right corner
 }
 
 // Footprints returns each element's mount footprint, in bench order. The rectangle is centred on
@@ -91,7 +93,7 @@ func Footprints(b *optics.Bench, places []optics.ElementPlace) []Footprint {
 	for i := range n {
 		e, p := &b.Elements[i], places[i]
 		m := MountOf(e)
-		first := Point{p.TableXMM, p.TableYMM}
+		first := r2.Vec{X: p.TableXMM, Y: p.TableYMM}
 		center := along(first, p.HeadingInDeg, elementLength(e)/2)
 		axis := p.HeadingInDeg
 		if e.Type == optics.TypeMirror {
@@ -107,8 +109,8 @@ func Footprints(b *optics.Bench, places []optics.ElementPlace) []Footprint {
 // makes it parallel to d_out - d_in. A beam that does not turn (turn 0, rejected by validation)
 // leaves the normal facing the arriving beam.
 func mirrorNormalDeg(inDeg, outDeg float64) float64 {
-	n := unitDeg(outDeg).sub(unitDeg(inDeg))
-	if n.norm() < 1e-12 {
+	n := r2.Sub(unitDeg(outDeg), unitDeg(inDeg))
+	if r2.Norm(n) < 1e-12 {
 		return NormDeg(inDeg + 180)
 	}
 	return headingOf(n)
@@ -116,14 +118,14 @@ func mirrorNormalDeg(inDeg, outDeg float64) float64 {
 
 // rectangle returns the corners of a width x depth rectangle centred on c with its depth along
 // axisDeg, counter-clockwise starting at the far (along +axis) right corner.
-func rectangle(c Point, axisDeg, widthMM, depthMM float64) [4]Point {
+func rectangle(c r2.Vec, axisDeg, widthMM, depthMM float64) [4]r2.Vec {
 	u := unitDeg(axisDeg)
-	v := u.perp()
-	du, dv := u.scale(depthMM/2), v.scale(widthMM/2)
-	return [4]Point{
-		c.add(du).sub(dv),
-		c.add(du).add(dv),
-		c.sub(du).add(dv),
-		c.sub(du).sub(dv),
+	v := perp(u)
+	du, dv := r2.Scale(depthMM/2, u), r2.Scale(widthMM/2, v)
+	return [4]r2.Vec{
+		r2.Sub(r2.Add(c, du), dv),
+		r2.Add(r2.Add(c, du), dv),
+		r2.Add(r2.Sub(c, du), dv),
+		r2.Sub(r2.Sub(c, du), dv),
 	}
 }

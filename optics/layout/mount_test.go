@@ -4,6 +4,8 @@ import (
 	"math"
 	"testing"
 
+	"gonum.org/v1/gonum/spatial/r2"
+
 	"raytable/optics"
 )
 
@@ -56,7 +58,7 @@ func TestFootprints(t *testing.T) {
 				t.Errorf("corner 0 (%g, %g), want (%g, %g)", fp.Corners[0].X, fp.Corners[0].Y, c.corner0X, c.c0Y)
 			}
 			// Self-consistency: opposite corners are a diagonal apart, sqrt(w² + d²).
-			diag := fp.Corners[0].sub(fp.Corners[2]).norm()
+			diag := r2.Norm(r2.Sub(fp.Corners[0], fp.Corners[2]))
 			if !near(diag, math.Hypot(c.width, c.depth), posTolMM) {
 				t.Errorf("diagonal %g, want %g", diag, math.Hypot(c.width, c.depth))
 			}
@@ -66,19 +68,21 @@ func TestFootprints(t *testing.T) {
 
 func TestConvexOverlap(t *testing.T) {
 	// Geometry identity: the diamond |x| + |y| <= 10 and the square [a, a+4]² meet exactly when 2a < 10.
-	diamond := []Point{{10, 0}, {0, 10}, {-10, 0}, {0, -10}}
-	sq := func(a float64) []Point { return []Point{{a, a}, {a + 4, a}, {a + 4, a + 4}, {a, a + 4}} }
+	diamond := []r2.Vec{{X: 10}, {Y: 10}, {X: -10}, {Y: -10}}
+	sq := func(a float64) []r2.Vec {
+		return []r2.Vec{{X: a, Y: a}, {X: a + 4, Y: a}, {X: a + 4, Y: a + 4}, {X: a, Y: a + 4}}
+	}
 	cases := []struct {
 		name string
-		a, b []Point
+		a, b []r2.Vec
 		want bool
 	}{
 		{"square inside the bounding box but outside the diamond", diamond, sq(6), false},
 		{"square across the diamond's edge", diamond, sq(4), true},
 		{"square touching the edge", diamond, sq(5), false},
-		{"segment through the diamond", diamond, []Point{{-20, 1}, {20, 1}}, true},
-		{"segment past the tip", diamond, []Point{{-20, 11}, {20, 11}}, false},
-		{"point inside", diamond, []Point{{1, 1}}, true},
+		{"segment through the diamond", diamond, []r2.Vec{{X: -20, Y: 1}, {X: 20, Y: 1}}, true},
+		{"segment past the tip", diamond, []r2.Vec{{X: -20, Y: 11}, {X: 20, Y: 11}}, false},
+		{"point inside", diamond, []r2.Vec{{X: 1, Y: 1}}, true},
 	}
 	for _, c := range cases {
 		if got := convexOverlap(c.a, c.b); got != c.want {

@@ -3,6 +3,8 @@ package layout
 import (
 	"fmt"
 
+	"gonum.org/v1/gonum/spatial/r2"
+
 	"raytable/optics"
 )
 
@@ -35,7 +37,7 @@ func Plan(b *optics.Bench, places []optics.ElementPlace, beamRadius func(pathMM 
 	fps := Footprints(b, places)
 	placements := placementsOf(b, places, fps)
 	segs := Segments(b, places)
-	bands := make([][][]Point, len(segs))
+	bands := make([][][]r2.Vec, len(segs))
 	for i, s := range segs {
 		bands[i] = band(s, beamRadius)
 	}
@@ -76,7 +78,7 @@ func offTable(b *optics.Bench, places []optics.ElementPlace, fps []Footprint) []
 	}
 	var warns []optics.Warning
 	for i, f := range fps {
-		first := Point{places[i].TableXMM, places[i].TableYMM}
+		first := r2.Vec{X: places[i].TableXMM, Y: places[i].TableYMM}
 		last := lastVertex(b, places[i], i)
 		switch {
 		case !inside(first, t.WidthMM, t.DepthMM) || !inside(last, t.WidthMM, t.DepthMM):
@@ -91,7 +93,7 @@ func offTable(b *optics.Bench, places []optics.ElementPlace, fps []Footprint) []
 	return warns
 }
 
-func allInside(pts []Point, t optics.Table) bool {
+func allInside(pts []r2.Vec, t optics.Table) bool {
 	for _, p := range pts {
 		if !inside(p, t.WidthMM, t.DepthMM) {
 			return false
@@ -100,7 +102,7 @@ func allInside(pts []Point, t optics.Table) bool {
 	return true
 }
 
-func beamOffTable(t optics.Table, segs []Segment, bands [][][]Point) []optics.Warning {
+func beamOffTable(t optics.Table, segs []Segment, bands [][][]r2.Vec) []optics.Warning {
 	if !tableKnown(t) {
 		return nil
 	}
@@ -148,13 +150,13 @@ func overlaps(fps []Footprint) []optics.Warning {
 	return warns
 }
 
-func mountsInBeam(segs []Segment, bands [][][]Point, fps []Footprint) []optics.Warning {
+func mountsInBeam(segs []Segment, bands [][][]r2.Vec, fps []Footprint) []optics.Warning {
 	boxes := make([]box, len(fps))
 	for i := range fps {
 		boxes[i] = boundsOf(fps[i].Corners[:])
 	}
 	var warns []optics.Warning
-	var pts []Point
+	var pts []r2.Vec
 	for si, s := range segs {
 		pts = pts[:0]
 		for _, q := range bands[si] {

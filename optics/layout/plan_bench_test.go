@@ -59,3 +59,19 @@ func BenchmarkWalk200(b *testing.B) {
 		Walk(bench)
 	}
 }
+
+// BenchmarkBoard200 lays out the board of the 200-element serpentine with a beam sampled every
+// 10 mm of its path.
+func BenchmarkBoard200(b *testing.B) {
+	bench := serpentine(optics.MaxElements)
+	places := Walk(bench)
+	r := &optics.Report{Elements: places, Holes: Holes(bench.Table).HoleGrid, Beam: &optics.BeamReport{}}
+	r.Placement, _ = Plan(bench, places, nil)
+	for z := 0.0; z <= places[len(places)-1].PathMM; z += 10 {
+		r.Beam.Samples = append(r.Beam.Samples, optics.BeamSample{PathMM: z, WTMM: 1 + z/1e4})
+	}
+	b.ReportAllocs()
+	for b.Loop() {
+		NewBoard(bench.Table, bench.Source, r)
+	}
+}

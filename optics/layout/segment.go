@@ -3,6 +3,8 @@ package layout
 import (
 	"math"
 
+	"gonum.org/v1/gonum/spatial/r2"
+
 	"raytable/optics"
 )
 
@@ -14,14 +16,14 @@ type Segment struct {
 	ToIndex     int     `json:"-"`
 	From        string  `json:"from"` // element id, "" for the source
 	To          string  `json:"to"`
-	Start       Point   `json:"start"`
-	End         Point   `json:"end"`
+	Start       r2.Vec  `json:"start"`
+	End         r2.Vec  `json:"end"`
 	StartPathMM float64 `json:"start_path_mm"`
 	EndPathMM   float64 `json:"end_path_mm"`
 }
 
 // LengthMM is the segment's length on the table.
-func (s Segment) LengthMM() float64 { return s.End.sub(s.Start).norm() }
+func (s Segment) LengthMM() float64 { return r2.Norm(r2.Sub(s.End, s.Start)) }
 
 // Segments returns the folded beam path as straight segments in beam order, from the source to the
 // last element's last vertex. Segments of zero length (gap_mm 0, or a lens of no thickness) are
@@ -37,10 +39,10 @@ func Segments(b *optics.Bench, places []optics.ElementPlace) []Segment {
 			segs = append(segs, s)
 		}
 	}
-	prev := Segment{FromIndex: -1, End: Point{b.Source.XMM, b.Source.YMM}}
+	prev := Segment{FromIndex: -1, End: r2.Vec{X: b.Source.XMM, Y: b.Source.YMM}}
 	for i := range n {
 		p := places[i]
-		first := Point{p.TableXMM, p.TableYMM}
+		first := r2.Vec{X: p.TableXMM, Y: p.TableYMM}
 		add(Segment{FromIndex: prev.FromIndex, ToIndex: i, From: prev.From, To: p.ID,
 			Start: prev.End, End: first, StartPathMM: prev.EndPathMM, EndPathMM: p.PathMM})
 		length := elementLength(&b.Elements[i])
@@ -63,23 +65,23 @@ const maxBandPieces = 32
 // w(z) = w0 sqrt(1 + (z/zR)²), and the envelope of a ray bundle (the largest of straight lines) are
 // both convex along a gap, so each chord lies on or outside the envelope: the band never misses the
 // beam, and splitting into pieces keeps it close to the beam near a focus.
-func band(s Segment, radius func(float64) float64) [][]Point {
+func band(s Segment, radius func(float64) float64) [][]r2.Vec {
 	length := s.LengthMM()
 	if length == 0 {
 		return nil
 	}
 	pieces := int(math.Ceil(length / bandStepMM))
 	pieces = max(1, min(maxBandPieces, pieces))
-	u := s.End.sub(s.Start).scale(1 / length)
-	v := u.perp()
-	quads := make([][]Point, pieces)
+	u := r2.Scale(1/length, r2.Sub(s.End, s.Start))
+	v := perp(u)
+	quads := make([][]r2.Vec, pieces)
 	r0 := safeRadius(radius, s.StartPathMM)
 	for k := range pieces {
 		t1 := float64(k+1) / float64(pieces)
 		r1 := safeRadius(radius, s.StartPathMM+t1*(s.EndPathMM-s.StartPathMM))
-		a := s.Start.add(u.scale(length * float64(k) / float64(pieces)))
-		b := s.Start.add(u.scale(length * t1))
-		quads[k] = []Point{a.sub(v.scale(r0)), b.sub(v.scale(r1)), b.add(v.scale(r1)), a.add(v.scale(r0))}
+		a := r2.Add(s.Start, r2.Scale(length*float64(k)/float64(pieces), u))
+		b := r2.Add(s.Start, r2.Scale(length*t1, u))
+		quads[k] = []r2.Vec{r2.Sub(a, r2.Scale(r0, v)), r2.Sub(b, r2.Scale(r1, v)), r2.Add(b, r2.Scale(r1, v)), r2.Add(a, r2.Scale(r0, v))}
 		r0 = r1
 	}
 	return quads

@@ -1,6 +1,10 @@
 package layout
 
-import "raytable/optics"
+import (
+	"raytable/optics"
+
+	"gonum.org/v1/gonum/spatial/r2"
+)
 
 // Walk follows the folded beam path from the source and returns, per element in bench order, its
 // position along the path and on the table. TableXMM/TableYMM is the element's first vertex: the
@@ -15,7 +19,7 @@ func Walk(b *optics.Bench) []optics.ElementPlace {
 		return nil
 	}
 	places := make([]optics.ElementPlace, len(b.Elements))
-	pos := Point{b.Source.XMM, b.Source.YMM}
+	pos := r2.Vec{X: b.Source.XMM, Y: b.Source.YMM}
 	heading := NormDeg(b.Source.HeadingDeg)
 	var path float64
 	for i := range b.Elements {
@@ -54,6 +58,6 @@ func elementLength(e *optics.Element) float64 {
 
 // lastVertex is where the beam leaves element i: its first vertex moved by its length along the
 // arriving heading.
-func lastVertex(b *optics.Bench, p optics.ElementPlace, i int) Point {
-	return along(Point{p.TableXMM, p.TableYMM}, p.HeadingInDeg, elementLength(&b.Elements[i]))
+func lastVertex(b *optics.Bench, p optics.ElementPlace, i int) r2.Vec {
+	return along(r2.Vec{X: p.TableXMM, Y: p.TableYMM}, p.HeadingInDeg, elementLength(&b.Elements[i]))
 }

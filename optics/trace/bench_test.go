@@ -3,6 +3,8 @@ package trace
 import (
 	"testing"
 
+	"gonum.org/v1/gonum/spatial/r3"
+
 	"raytable/optics"
 )
 
@@ -20,7 +22,7 @@ func benchRays(n int) []Start {
 	rays := make([]Start, n)
 	for i := range rays {
 		f := float64(i)/float64(n-1)*2 - 1
-		rays[i] = Start{Pos: Vec{0.3 * f, 4 * f, 0}, Dir: Unit(Vec{0, 0.01 * f, 1})}
+		rays[i] = Start{Pos: r3.Vec{X: 0.3 * f, Y: 4 * f, Z: 0}, Dir: unit(r3.Vec{X: 0, Y: 0.01 * f, Z: 1})}
 	}
 	return rays
 }

@@ -1,6 +1,10 @@
 package trace
 
-import "math"
+import (
+	"math"
+
+	"gonum.org/v1/gonum/spatial/r3"
+)
 
 // Why an intersection failed.
 type missKind int
@@ -23,42 +27,42 @@ const (
 // and picks the intersection on the vertex side of the sphere. A negative s is allowed: when
 // surfaces are placed so close that one bulges past the other's plane (a face right at an iris),
 // the ray's line is extended, as is usual for a reference plane.
-func intersect(p0, d, a Vec, c float64) (Vec, missKind) {
-	da := Dot(d, a)
+func intersect(p0, d, a r3.Vec, c float64) (r3.Vec, missKind) {
+	da := r3.Dot(d, a)
 	if da == 0 || math.IsNaN(da) {
-		return Vec{}, missParallel
+		return r3.Vec{}, missParallel
 	}
-	t := Add(p0, Scale(-Dot(p0, a)/da, d)) // on the vertex plane
+	t := r3.Add(p0, r3.Scale(-r3.Dot(p0, a)/da, d)) // on the vertex plane
 	if c == 0 {
 		return t, hitOK
 	}
-	f := c * Dot(t, t)
+	f := c * r3.Dot(t, t)
 	if f == 0 {
 		return t, hitOK // at the vertex itself
 	}
-	g := da - c*Dot(t, d)
+	g := da - c*r3.Dot(t, d)
 	disc := g*g - c*f
 	if disc < 0 {
-		return Vec{}, missSphere
+		return r3.Vec{}, missSphere
 	}
 	den := g + math.Copysign(math.Sqrt(disc), g)
 	if den == 0 {
-		return Vec{}, missSphere
+		return r3.Vec{}, missSphere
 	}
-	p := Add(t, Scale(f/den, d))
-	if 1-c*Dot(p, a) <= 0 {
-		return Vec{}, missRim
+	p := r3.Add(t, r3.Scale(f/den, d))
+	if 1-c*r3.Dot(p, a) <= 0 {
+		return r3.Vec{}, missRim
 	}
 	return p, hitOK
 }
 
 // normal is the unit normal of the surface of intersect at a point p on it, pointing along a
 // (the vertex normal) on the vertex hemisphere: (p - centre)/(-R) = a - c·p.
-func normal(p, a Vec, c float64) Vec {
+func normal(p, a r3.Vec, c float64) r3.Vec {
 	if c == 0 {
 		return a
 	}
-	return Sub(a, Scale(c, p))
+	return r3.Sub(a, r3.Scale(c, p))
 }
 
 // refract bends the unit direction d at a surface with unit normal nrm, going from index n1 to
@@ -66,33 +70,33 @@ func normal(p, a Vec, c float64) Vec {
 // Optical Systems", 1986, ch. 4): the component along the face scales by n1/n2 and the component
 // along the normal is whatever keeps the result a unit vector. ok is false at total internal
 // reflection, when no such component exists.
-func refract(d, nrm Vec, n1, n2 float64) (Vec, bool) {
-	cosI := Dot(d, nrm)
+func refract(d, nrm r3.Vec, n1, n2 float64) (r3.Vec, bool) {
+	cosI := r3.Dot(d, nrm)
 	if cosI < 0 { // normal against the ray: turn it round
-		nrm = Scale(-1, nrm)
+		nrm = r3.Scale(-1, nrm)
 		cosI = -cosI
 	}
 	mu := n1 / n2
 	k := 1 - mu*mu*(1-cosI*cosI)
 	if k < 0 {
-		return Vec{}, false
+		return r3.Vec{}, false
 	}
-	return Add(Scale(mu, d), Scale(math.Sqrt(k)-mu*cosI, nrm)), true
+	return r3.Add(r3.Scale(mu, d), r3.Scale(math.Sqrt(k)-mu*cosI, nrm)), true
 }
 
 // reflect mirrors the direction d off a surface with unit normal nrm: d - 2(d·n)n.
-func reflect(d, nrm Vec) Vec {
-	return Sub(d, Scale(2*Dot(d, nrm), nrm))
+func reflect(d, nrm r3.Vec) r3.Vec {
+	return r3.Sub(d, r3.Scale(2*r3.Dot(d, nrm), nrm))
 }
 
 // mirrorNormal is the unit normal at the vertex of a mirror that turns the heading by turnRad,
 // in the incoming frame, pointing back towards the arriving light. It bisects the leaving axis
 // (0, sin t, cos t) and the reversed incoming axis (0, 0, -1).
-func mirrorNormal(turnRad float64) Vec {
-	v := Vec{0, math.Sin(turnRad), math.Cos(turnRad) - 1}
-	n := Norm(v)
+func mirrorNormal(turnRad float64) r3.Vec {
+	v := r3.Vec{X: 0, Y: math.Sin(turnRad), Z: math.Cos(turnRad) - 1}
+	n := norm(v)
 	if n < 1e-12 { // no turn at all: not a valid mirror; keep the plane normal to the axis
-		return Vec{0, 0, -1}
+		return r3.Vec{X: 0, Y: 0, Z: -1}
 	}
-	return Scale(1/n, v)
+	return r3.Scale(1/n, v)
 }

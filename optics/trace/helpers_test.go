@@ -4,6 +4,8 @@ import (
 	"math"
 	"testing"
 
+	"gonum.org/v1/gonum/spatial/r3"
+
 	"raytable/optics"
 )
 
@@ -58,7 +60,9 @@ func path(surfs ...optics.Surface) *optics.Path {
 }
 
 // parallel is a ray parallel to the axis at (x, y) on the source plane.
-func parallel(x, y float64) Start { return Start{Pos: Vec{x, y, 0}, Dir: Vec{0, 0, 1}} }
+func parallel(x, y float64) Start {
+	return Start{Pos: r3.Vec{X: x, Y: y, Z: 0}, Dir: r3.Vec{X: 0, Y: 0, Z: 1}}
+}
 
 // mustTrace traces and fails the test unless the ray passes with status ok.
 func mustTrace(t *testing.T, p *optics.Path, s Start) Result {

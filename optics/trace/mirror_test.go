@@ -5,6 +5,8 @@ import (
 	"math"
 	"testing"
 
+	"gonum.org/v1/gonum/spatial/r3"
+
 	"raytable/optics"
 	"raytable/optics/internal/approx"
 )
@@ -31,8 +33,8 @@ func TestConcaveMirrorSagInLeavingFrame(t *testing.T) {
 func TestFlatMirrorLeavesRaysUnchanged(t *testing.T) {
 	rays := []Start{
 		parallel(0, 0), parallel(3, -2),
-		{Pos: Vec{1, 2, 0}, Dir: Unit(Vec{0.05, -0.08, 1})},
-		{Pos: Vec{-4, 1, 0}, Dir: Unit(Vec{-0.1, 0.02, 1})},
+		{Pos: r3.Vec{X: 1, Y: 2, Z: 0}, Dir: unit(r3.Vec{X: 0.05, Y: -0.08, Z: 1})},
+		{Pos: r3.Vec{X: -4, Y: 1, Z: 0}, Dir: unit(r3.Vec{X: -0.1, Y: 0.02, Z: 1})},
 	}
 	const lineTol = 1e-11 // positions of order 100 mm after 140 mm of path; rounding leaves 2e-14 here
 	for _, turn := range []float64{90, -90, 45, -30, 150, 180} {
@@ -41,12 +43,12 @@ func TestFlatMirrorLeavesRaysUnchanged(t *testing.T) {
 			t.Run(fmt.Sprintf("turn %g ray %d", turn, i), func(t *testing.T) {
 				r := mustTrace(t, p, s)
 				end := last(r)
-				want := Add(s.Pos, Scale(140/s.Dir.Z, s.Dir))
-				if d := Norm(Sub(Vec{end.Pos.X, end.Pos.Y, 140}, want)); !approx.Abs(d, 0, lineTol) {
+				want := r3.Add(s.Pos, r3.Scale(140/s.Dir.Z, s.Dir))
+				if d := norm(r3.Sub(r3.Vec{X: end.Pos.X, Y: end.Pos.Y, Z: 140}, want)); !approx.Abs(d, 0, lineTol) {
 					t.Errorf("at the screen %+v, straight line gives %+v", end.Pos, want)
 				}
-				if d := Norm(Sub(end.Dir, Unit(s.Dir))); !approx.Abs(d, 0, approx.Rounding) {
-					t.Errorf("dir %+v, want %+v", end.Dir, Unit(s.Dir))
+				if d := norm(r3.Sub(end.Dir, unit(s.Dir))); !approx.Abs(d, 0, approx.Rounding) {
+					t.Errorf("dir %+v, want %+v", end.Dir, unit(s.Dir))
 				}
 			})
 		}
@@ -89,7 +91,7 @@ func TestCoddingtonFociOfTiltedConcaveMirror(t *testing.T) {
 		p := path(mirror(40, r, turn))
 		t.Run(fmt.Sprint("turn ", turn), func(t *testing.T) {
 			chief := mustTrace(t, p, parallel(0, 0)).Points[0]
-			if !approx.Abs(Norm(chief.Pos), 0, approx.Rounding) || !approx.Abs(Norm(Sub(chief.Dir, Vec{0, 0, 1})), 0, approx.Rounding) {
+			if !approx.Abs(norm(chief.Pos), 0, approx.Rounding) || !approx.Abs(norm(r3.Sub(chief.Dir, r3.Vec{X: 0, Y: 0, Z: 1})), 0, approx.Rounding) {
 				t.Fatalf("chief ray %+v does not leave along the axis", chief)
 			}
 			// Coma moves the crossing of one ray by ~h; the symmetric pair cancels it.

@@ -4,6 +4,8 @@ import (
 	"fmt"
 	"testing"
 
+	"gonum.org/v1/gonum/spatial/r3"
+
 	"raytable/optics/internal/approx"
 )
 
@@ -19,10 +21,10 @@ func TestMirrorTurnAfterOddFold(t *testing.T) {
 	const hitTol = 1e-10 // hit positions of order 10 mm behind a fold; rounding leaves 8e-14 here
 	rays := []Start{
 		parallel(0, 4), parallel(3, -5), parallel(-2, 6),
-		{Pos: Vec{1, 2, 0}, Dir: Unit(Vec{0.03, -0.05, 1})},
-		{Pos: Vec{-3, -1, 0}, Dir: Unit(Vec{-0.02, 0.04, 1})},
+		{Pos: r3.Vec{X: 1, Y: 2, Z: 0}, Dir: unit(r3.Vec{X: 0.03, Y: -0.05, Z: 1})},
+		{Pos: r3.Vec{X: -3, Y: -1, Z: 0}, Dir: unit(r3.Vec{X: -0.02, Y: 0.04, Z: 1})},
 	}
-	flipY := func(v Vec) Vec { return Vec{v.X, -v.Y, v.Z} }
+	flipY := func(v r3.Vec) r3.Vec { return r3.Vec{X: v.X, Y: -v.Y, Z: v.Z} }
 	for _, fold := range []float64{90, -90, 60} {
 		for _, turn := range []float64{60, -60, 120, -150} {
 			folded := path(mirror(40, 0, fold), mirror(100, r, turn))
@@ -32,10 +34,10 @@ func TestMirrorTurnAfterOddFold(t *testing.T) {
 					got := mustTrace(t, folded, s).Points[1]
 					want := mustTrace(t, alone, Start{Pos: flipY(s.Pos), Dir: flipY(s.Dir)}).Points[0]
 					want.Pos, want.Dir = flipY(want.Pos), flipY(want.Dir)
-					if d := Norm(Sub(got.Pos, want.Pos)); !approx.Abs(d, 0, hitTol) {
+					if d := norm(r3.Sub(got.Pos, want.Pos)); !approx.Abs(d, 0, hitTol) {
 						t.Errorf("hit %+v behind the fold, want %+v", got.Pos, want.Pos)
 					}
-					if d := Norm(Sub(got.Dir, want.Dir)); !approx.Abs(d, 0, approx.Rounding) {
+					if d := norm(r3.Sub(got.Dir, want.Dir)); !approx.Abs(d, 0, approx.Rounding) {
 						t.Errorf("dir %+v behind the fold, want %+v", got.Dir, want.Dir)
 					}
 				})

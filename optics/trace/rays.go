@@ -5,6 +5,8 @@ import (
 	"math"
 	"strconv"
 
+	"gonum.org/v1/gonum/spatial/r3"
+
 	"raytable/optics"
 )
 
@@ -35,9 +37,9 @@ func Rays(b *optics.Bench, p *optics.Path) []RaySpec {
 		n = 0
 	}
 	var fields []float64
-	unit, point := "deg", src.Kind == optics.SourcePoint
+	fieldUnit, point := "deg", src.Kind == optics.SourcePoint
 	if point {
-		fields, unit = src.ObjectHeightsMM, "mm"
+		fields, fieldUnit = src.ObjectHeightsMM, "mm"
 	} else {
 		fields = src.FieldAnglesDeg
 	}
@@ -51,8 +53,8 @@ func Rays(b *optics.Bench, p *optics.Path) []RaySpec {
 		specs = append(specs, RaySpec{
 			Name: fmt.Sprintf("explicit[%d]", i),
 			Start: Start{
-				Pos: Vec{r.XMM, r.HeightMM, 0},
-				Dir: Unit(Vec{math.Tan(r.XAngleDeg * math.Pi / 180), u, 1}),
+				Pos: r3.Vec{X: r.XMM, Y: r.HeightMM, Z: 0},
+				Dir: unit(r3.Vec{X: math.Tan(r.XAngleDeg * math.Pi / 180), Y: u, Z: 1}),
 			},
 			ParaxialY: r.HeightMM,
 			ParaxialU: u,
@@ -77,19 +79,19 @@ func Rays(b *optics.Bench, p *optics.Path) []RaySpec {
 					pupil = -1 + 2*float64(j)/float64(n-1)
 				}
 				spec := RaySpec{
-					Name:  fmt.Sprintf("fan %s%s %snm %0*d", fs, unit, ws, digits, j),
+					Name:  fmt.Sprintf("fan %s%s %snm %0*d", fs, fieldUnit, ws, digits, j),
 					K:     k,
-					Field: fs + " " + unit,
+					Field: fs + " " + fieldUnit,
 					Pupil: pupil,
 				}
 				if point {
 					theta := pupil * math.Asin(math.Min(na, 1))
-					spec.Start = Start{Pos: Vec{0, f, 0}, Dir: Vec{0, math.Sin(theta), math.Cos(theta)}}
+					spec.Start = Start{Pos: r3.Vec{X: 0, Y: f, Z: 0}, Dir: r3.Vec{X: 0, Y: math.Sin(theta), Z: math.Cos(theta)}}
 					spec.ParaxialY, spec.ParaxialU = f, pupil*na
 				} else {
 					u := math.Tan(f * math.Pi / 180)
 					y := pupil * semi
-					spec.Start = Start{Pos: Vec{0, y, 0}, Dir: Unit(Vec{0, u, 1})}
+					spec.Start = Start{Pos: r3.Vec{X: 0, Y: y, Z: 0}, Dir: unit(r3.Vec{X: 0, Y: u, Z: 1})}
 					spec.ParaxialY, spec.ParaxialU = y, u
 				}
 				specs = append(specs, spec)

@@ -4,6 +4,8 @@ import (
 	"math"
 	"testing"
 
+	"gonum.org/v1/gonum/spatial/r3"
+
 	"raytable/optics"
 	"raytable/optics/internal/approx"
 )
@@ -31,8 +33,8 @@ func TestRaysCollimated(t *testing.T) {
 	if e1.Name != "explicit[1]" || e1.K != 0 || e1.Field != "" {
 		t.Errorf("second explicit ray %+v", e1)
 	}
-	wantDir := Unit(Vec{math.Tan(math.Pi / 180), math.Tan(-3 * math.Pi / 180), 1})
-	if !approx.Abs(Norm(Sub(e1.Start.Dir, wantDir)), 0, approx.Rounding) || e1.Start.Pos != (Vec{-0.5, 0, 0}) {
+	wantDir := unit(r3.Vec{X: math.Tan(math.Pi / 180), Y: math.Tan(-3 * math.Pi / 180), Z: 1})
+	if !approx.Abs(norm(r3.Sub(e1.Start.Dir, wantDir)), 0, approx.Rounding) || e1.Start.Pos != (r3.Vec{X: -0.5, Y: 0, Z: 0}) {
 		t.Errorf("explicit[1] starts %+v, want pos (-0.5, 0, 0) dir %+v", e1.Start, wantDir)
 	}
 	if e0 := rs[0]; e0.ParaxialY != 1 || !approx.Abs(e0.ParaxialU, math.Tan(2*math.Pi/180), approx.Rounding) {
@@ -70,14 +72,14 @@ func TestRaysPointSource(t *testing.T) {
 	if top.Field != "1.5 mm" || top.Name != "fan 1.5mm 780nm 2" || top.Pupil != 1 {
 		t.Errorf("last ray %+v", top)
 	}
-	if top.Start.Pos != (Vec{0, 1.5, 0}) || !approx.Abs(top.Start.Dir.Y, 0.1, approx.Rounding) ||
+	if top.Start.Pos != (r3.Vec{X: 0, Y: 1.5, Z: 0}) || !approx.Abs(top.Start.Dir.Y, 0.1, approx.Rounding) ||
 		!approx.Abs(top.Start.Dir.Z, math.Sqrt(0.99), approx.Rounding) {
 		t.Errorf("marginal ray starts %+v, want from (0, 1.5, 0) with dir (0, 0.1, sqrt 0.99)", top.Start)
 	}
 	if top.ParaxialY != 1.5 || !approx.Abs(top.ParaxialU, 0.1, approx.Rounding) {
 		t.Errorf("paraxial (%g, %g), want (1.5, 0.1)", top.ParaxialY, top.ParaxialU)
 	}
-	if mid := rs[4]; mid.Start.Dir != (Vec{0, 0, 1}) || mid.ParaxialU != 0 {
+	if mid := rs[4]; mid.Start.Dir != (r3.Vec{X: 0, Y: 0, Z: 1}) || mid.ParaxialU != 0 {
 		t.Errorf("chief ray of the fan %+v, want along the axis", mid.Start)
 	}
 }

@@ -6,6 +6,8 @@ import (
 	"strings"
 	"testing"
 
+	"gonum.org/v1/gonum/spatial/r3"
+
 	"raytable/optics"
 	"raytable/optics/internal/approx"
 )
@@ -47,8 +49,8 @@ func TestSnellAtFlatFace(t *testing.T) {
 			for _, az := range []float64{0, 35, 90} { // azimuth: 0 meridional, else skew
 				t.Run(fmt.Sprintf("n=%g/%gdeg/az%g", n2, deg, az), func(t *testing.T) {
 					th, phi := deg*math.Pi/180, az*math.Pi/180
-					d := Vec{math.Sin(th) * math.Sin(phi), math.Sin(th) * math.Cos(phi), math.Cos(th)}
-					r := mustTrace(t, path(face(10, 0, n2)), Start{Pos: Vec{0.5, -1, 0}, Dir: d})
+					d := r3.Vec{X: math.Sin(th) * math.Sin(phi), Y: math.Sin(th) * math.Cos(phi), Z: math.Cos(th)}
+					r := mustTrace(t, path(face(10, 0, n2)), Start{Pos: r3.Vec{X: 0.5, Y: -1, Z: 0}, Dir: d})
 					out := r.Points[0].Dir
 					sin2 := math.Hypot(out.X, out.Y)
 					if got, want := n2*sin2, 1*math.Sin(th); !approx.Abs(got, want, approx.Rounding) {
@@ -57,8 +59,8 @@ func TestSnellAtFlatFace(t *testing.T) {
 					if cross := out.X*d.Y - out.Y*d.X; !approx.Abs(cross, 0, approx.Rounding) {
 						t.Errorf("refracted ray left the plane of incidence: %+v vs %+v", out, d)
 					}
-					if !approx.Abs(Norm(out), 1, approx.Rounding) {
-						t.Errorf("|dir| = %.15g, want 1", Norm(out))
+					if !approx.Abs(norm(out), 1, approx.Rounding) {
+						t.Errorf("|dir| = %.15g, want 1", norm(out))
 					}
 				})
 			}
@@ -77,7 +79,7 @@ func TestTotalInternalReflectionBeyondCriticalAngle(t *testing.T) {
 		p := path(face(gap, 1/radius, n), face(gap+radius, 0, 1))
 		crit := math.Asin(1 / n)
 		launch := func(th float64) Start {
-			return Start{Pos: Vec{0, -(gap + radius) * math.Tan(th), 0}, Dir: Vec{0, math.Sin(th), math.Cos(th)}}
+			return Start{Pos: r3.Vec{X: 0, Y: -(gap + radius) * math.Tan(th), Z: 0}, Dir: r3.Vec{X: 0, Y: math.Sin(th), Z: math.Cos(th)}}
 		}
 		t.Run(fmt.Sprintf("n=%g below", n), func(t *testing.T) {
 			r := mustTrace(t, p, launch(crit-margin))
@@ -109,7 +111,7 @@ func TestWavelengthIndexSelectsMedium(t *testing.T) {
 	f.Index = []float64{1.5, 1.6}
 	p := &optics.Path{WavelengthsNM: []float64{700, 400}, Surfaces: []optics.Surface{f}}
 	th := 30 * math.Pi / 180
-	s := Start{Dir: Vec{0, math.Sin(th), math.Cos(th)}}
+	s := Start{Dir: r3.Vec{X: 0, Y: math.Sin(th), Z: math.Cos(th)}}
 	for k, n := range f.Index {
 		r := Trace(p, k, s, nil)
 		if got := n * r.Points[0].Dir.Y; !approx.Abs(got, math.Sin(th), approx.Rounding) {

@@ -6,6 +6,8 @@ import (
 	"math/rand/v2"
 	"testing"
 
+	"gonum.org/v1/gonum/spatial/r3"
+
 	"raytable/optics"
 	"raytable/optics/internal/approx"
 )
@@ -45,17 +47,17 @@ func TestRayReversibility(t *testing.T) {
 		back := reversed(p, length)
 		for i := range 50 {
 			s := Start{
-				Pos: Vec{rng.Float64()*6 - 3, rng.Float64()*6 - 3, 0},
-				Dir: Unit(Vec{rng.Float64()*0.1 - 0.05, rng.Float64()*0.1 - 0.05, 1}),
+				Pos: r3.Vec{X: rng.Float64()*6 - 3, Y: rng.Float64()*6 - 3, Z: 0},
+				Dir: unit(r3.Vec{X: rng.Float64()*0.1 - 0.05, Y: rng.Float64()*0.1 - 0.05, Z: 1}),
 			}
 			t.Run(fmt.Sprintf("%s/%02d", name, i), func(t *testing.T) {
 				end := last(mustTrace(t, p, s))
-				turned := Start{Pos: Vec{end.Pos.X, end.Pos.Y, 0}, Dir: Vec{-end.Dir.X, -end.Dir.Y, end.Dir.Z}}
+				turned := Start{Pos: r3.Vec{X: end.Pos.X, Y: end.Pos.Y, Z: 0}, Dir: r3.Vec{X: -end.Dir.X, Y: -end.Dir.Y, Z: end.Dir.Z}}
 				home := last(mustTrace(t, back, turned))
 				if d := math.Hypot(home.Pos.X-s.Pos.X, home.Pos.Y-s.Pos.Y); !approx.Abs(d, 0, reverseTol) {
 					t.Errorf("came back %.3g mm away: %+v vs start %+v", d, home.Pos, s.Pos)
 				}
-				if d := Norm(Sub(home.Dir, Vec{-s.Dir.X, -s.Dir.Y, s.Dir.Z})); !approx.Abs(d, 0, reverseTol) {
+				if d := norm(r3.Sub(home.Dir, r3.Vec{X: -s.Dir.X, Y: -s.Dir.Y, Z: s.Dir.Z})); !approx.Abs(d, 0, reverseTol) {
 					t.Errorf("came back with direction %+v, want the reverse of %+v", home.Dir, s.Dir)
 				}
 			})

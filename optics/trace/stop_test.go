@@ -5,6 +5,8 @@ import (
 	"strings"
 	"testing"
 
+	"gonum.org/v1/gonum/spatial/r3"
+
 	"raytable/optics"
 	"raytable/optics/internal/approx"
 )
@@ -21,8 +23,8 @@ func TestApertureClips(t *testing.T) {
 		{parallel(0, -1.49), optics.RayOK},
 		{parallel(1.0, 1.0), optics.RayOK}, // r = 1.414
 		{parallel(0, 1.51), optics.RayClipped},
-		{parallel(1.1, 1.1), optics.RayClipped},                                   // r = 1.556
-		{Start{Pos: Vec{0, 0, 0}, Dir: Unit(Vec{0, 0.08, 1})}, optics.RayClipped}, // 1.6 mm at the iris
+		{parallel(1.1, 1.1), optics.RayClipped}, // r = 1.556
+		{Start{Pos: r3.Vec{X: 0, Y: 0, Z: 0}, Dir: unit(r3.Vec{X: 0, Y: 0.08, Z: 1})}, optics.RayClipped}, // 1.6 mm at the iris
 	}
 	for _, c := range cases {
 		r := Trace(p, 0, c.ray, nil)
@@ -84,7 +86,7 @@ func TestRayBeyondRimMisses(t *testing.T) {
 	// The line y = 36 - 2z meets the sphere (centre z = 15) where 5z² - 174z + 1496 = 0, at
 	// z = 15.51 and 19.29 (solved by hand), both behind the centre plane, where the face does not
 	// exist.
-	r := Trace(p, 0, Start{Pos: Vec{0, 36, 0}, Dir: Unit(Vec{0, -2, 1})}, nil)
+	r := Trace(p, 0, Start{Pos: r3.Vec{X: 0, Y: 36, Z: 0}, Dir: unit(r3.Vec{X: 0, Y: -2, Z: 1})}, nil)
 	if r.Status != optics.RayMissed || r.Surface != 0 {
 		t.Fatalf("%s at %d (%s), want missed at 0", r.Status, r.Surface, r.Reason)
 	}
@@ -106,10 +108,10 @@ func TestDumpEndsRayWithOK(t *testing.T) {
 func TestBadStartIsMissedWithoutPanic(t *testing.T) {
 	p := path(face(10, 0.02, 1.5))
 	for _, s := range []Start{
-		{Pos: Vec{}, Dir: Vec{}},
-		{Pos: Vec{}, Dir: Vec{0, 0, -1}},
-		{Pos: Vec{math.NaN(), 0, 0}, Dir: Vec{0, 0, 1}},
-		{Pos: Vec{}, Dir: Vec{0, math.Inf(1), 1}},
+		{Pos: r3.Vec{}, Dir: r3.Vec{}},
+		{Pos: r3.Vec{}, Dir: r3.Vec{X: 0, Y: 0, Z: -1}},
+		{Pos: r3.Vec{X: math.NaN(), Y: 0, Z: 0}, Dir: r3.Vec{X: 0, Y: 0, Z: 1}},
+		{Pos: r3.Vec{}, Dir: r3.Vec{X: 0, Y: math.Inf(1), Z: 1}},
 	} {
 		if r := Trace(p, 0, s, nil); r.Status != optics.RayMissed || r.Reason == "" {
 			t.Errorf("start %+v: %s (%q), want missed with a reason", s, r.Status, r.Reason)

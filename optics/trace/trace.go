@@ -4,13 +4,15 @@ import (
 	"fmt"
 	"math"
 
+	"gonum.org/v1/gonum/spatial/r3"
+
 	"raytable/optics"
 )
 
 // Start is a ray at the source plane (z = 0 of the path, in air): its position and its unit
 // direction. Trace normalises Dir anyway.
 type Start struct {
-	Pos, Dir Vec
+	Pos, Dir r3.Vec
 }
 
 // Point is a ray at one surface: Pos relative to the surface vertex in the frame of the leaving
@@ -18,8 +20,8 @@ type Start struct {
 // reflected, Dir is the direction it arrived with (unfolded), since it goes no further.
 type Point struct {
 	Surface int // index into Path.Surfaces
-	Pos     Vec
-	Dir     Vec
+	Pos     r3.Vec
+	Dir     r3.Vec
 }
 
 // Result is what became of one ray.
@@ -39,19 +41,19 @@ func Trace(p *optics.Path, k int, s Start, buf []Point) Result {
 		return Result{Status: optics.RayMissed, Surface: -1, Points: pts,
 			Reason: fmt.Sprintf("wavelength index %d is outside the %d wavelengths of the path", k, len(p.WavelengthsNM))}
 	}
-	dn := Norm(s.Dir)
+	dn := norm(s.Dir)
 	if !(dn > 0) || math.IsInf(dn, 0) || !finite(s.Pos) || s.Dir.Z <= 0 {
 		return Result{Status: optics.RayMissed, Surface: -1, Points: pts,
 			Reason: "the ray does not start towards the path (its direction must point downstream)"}
 	}
-	pos, dir := s.Pos, Scale(1/dn, s.Dir)
+	pos, dir := s.Pos, r3.Scale(1/dn, s.Dir)
 	prevZ := 0.0
 	// side is +1 while the frame's +y lies left of travel and -1 after an odd number of mirrors,
 	// when it lies to the right: a counter-clockwise turn then tilts the mirror towards -y.
 	side := 1.0
 	for i := range p.Surfaces {
 		sf := &p.Surfaces[i]
-		p0 := Vec{pos.X, pos.Y, pos.Z - (sf.PathMM - prevZ)}
+		p0 := r3.Vec{X: pos.X, Y: pos.Y, Z: pos.Z - (sf.PathMM - prevZ)}
 		prevZ = sf.PathMM
 		stop := func(status, reason string) Result {
 			return Result{Status: status, Surface: i, Reason: reason, Points: pts}
@@ -65,7 +67,7 @@ func Trace(p *optics.Path, k int, s Start, buf []Point) Result {
 				return stop(optics.RayMissed, missReason(sf, miss))
 			}
 			// Clear aperture on the mirror: distance from the normal through the vertex.
-			r := Norm(Sub(hit, Scale(Dot(hit, n0), n0)))
+			r := norm(r3.Sub(hit, r3.Scale(r3.Dot(hit, n0), n0)))
 			out := reflect(hit, n0) // into the leaving (unfolded) frame
 			if r > sf.SemiAperture {
 				pts = append(pts, Point{Surface: i, Pos: out, Dir: dir})
@@ -79,7 +81,7 @@ func Trace(p *optics.Path, k int, s Start, buf []Point) Result {
 			pos, dir = out, d
 
 		case optics.Refracting:
-			axis := Vec{0, 0, 1}
+			axis := r3.Vec{X: 0, Y: 0, Z: 1}
 			hit, miss := intersect(p0, dir, axis, sf.Curvature)
 			if miss != hitOK {
 				return stop(optics.RayMissed, missReason(sf, miss))
@@ -100,7 +102,7 @@ func Trace(p *optics.Path, k int, s Start, buf []Point) Result {
 			pos, dir = hit, d
 
 		default: // Thin and Plane: a flat plane at the vertex
-			hit, miss := intersect(p0, dir, Vec{0, 0, 1}, 0)
+			hit, miss := intersect(p0, dir, r3.Vec{X: 0, Y: 0, Z: 1}, 0)
 			if miss != hitOK {
 				return stop(optics.RayMissed, missReason(sf, miss))
 			}
@@ -110,7 +112,7 @@ func Trace(p *optics.Path, k int, s Start, buf []Point) Result {
 			}
 			if sf.Kind == optics.Thin && sf.FocalMM != 0 && !math.IsInf(sf.FocalMM, 0) {
 				// An ideal thin lens changes the slopes dx/dz and dy/dz by -x/f and -y/f.
-				dir = Unit(Vec{dir.X/dir.Z - hit.X/sf.FocalMM, dir.Y/dir.Z - hit.Y/sf.FocalMM, 1})
+				dir = unit(r3.Vec{X: dir.X/dir.Z - hit.X/sf.FocalMM, Y: dir.Y/dir.Z - hit.Y/sf.FocalMM, Z: 1})
 			}
 			pts = append(pts, Point{Surface: i, Pos: hit, Dir: dir})
 			if sf.Stops {
@@ -122,7 +124,7 @@ func Trace(p *optics.Path, k int, s Start, buf []Point) Result {
 	return Result{Status: optics.RayOK, Surface: -1, Points: pts}
 }
 
-func finite(v Vec) bool {
+func finite(v r3.Vec) bool {
 	return !math.IsNaN(v.X+v.Y+v.Z) && !math.IsInf(v.X+v.Y+v.Z, 0)
 }
 

@@ -1,32 +1,29 @@
 package trace
 
-import "math"
+import (
+	"math"
 
-// Vec is a point or a direction in a surface frame: X up, Y in the table plane to the left of
-// travel (before any mirror), Z along the axis, all in mm.
-type Vec struct{ X, Y, Z float64 }
+	"gonum.org/v1/gonum/spatial/r3"
+)
 
-// Add returns a + b.
-func Add(a, b Vec) Vec { return Vec{a.X + b.X, a.Y + b.Y, a.Z + b.Z} }
+// Points and directions are gonum's r3.Vec in a surface frame: X up, Y in the table plane to the
+// left of travel (before any mirror), Z along the axis, all in mm. Sums, differences, scaling and
+// dot products are r3's (they inline, so the trace allocates nothing per ray). The length and the
+// unit vector are our own: r3.Norm nests two math.Hypot calls, which is slower in the inner loop
+// and rounds differently from the square root of the dot product that every traced number so far
+// was computed with; and r3.Unit turns the zero vector into NaNs, where callers here check the
+// length themselves.
 
-// Sub returns a - b.
-func Sub(a, b Vec) Vec { return Vec{a.X - b.X, a.Y - b.Y, a.Z - b.Z} }
+// norm returns the length of v, the square root of v·v (no overflow guard: ray vectors in mm are
+// far from the float64 range).
+func norm(v r3.Vec) float64 { return math.Sqrt(r3.Dot(v, v)) }
 
-// Scale returns f·v.
-func Scale(f float64, v Vec) Vec { return Vec{f * v.X, f * v.Y, f * v.Z} }
-
-// Dot returns the scalar product a·b.
-func Dot(a, b Vec) float64 { return a.X*b.X + a.Y*b.Y + a.Z*b.Z }
-
-// Norm returns the length of v.
-func Norm(v Vec) float64 { return math.Sqrt(Dot(v, v)) }
-
-// Unit returns v scaled to length 1. The zero vector has no direction: Unit returns it unchanged
-// with NaN-free zeros, and callers that need a direction must check Norm first.
-func Unit(v Vec) Vec {
-	n := Norm(v)
+// unit returns v scaled to length 1. The zero vector has no direction: unit returns it unchanged
+// with NaN-free zeros, and callers that need a direction must check its norm first.
+func unit(v r3.Vec) r3.Vec {
+	n := norm(v)
 	if n == 0 {
 		return v
 	}
-	return Scale(1/n, v)
+	return r3.Scale(1/n, v)
 }

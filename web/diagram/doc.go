@@ -4,9 +4,11 @@
 //
 // It only turns computed numbers into pictures: millimetres to pixels, layout of labels, legends and
 // scale bars. Every ray point, beam radius, position and warning comes from an optics.Report; the
-// package never traces, refracts or propagates anything. Drawing a lens face as a circular arc from
-// its radius and semi-diameter, or rotating a mount footprint to its heading, is geometry of the
-// picture, not physics.
+// package never traces, refracts or propagates anything. The table view and the plan draw the
+// report's board (optics.Board, laid out by optics/layout): the folded path, the beam's band, the
+// element faces and the mount footprints come computed in table millimetres, and this package only
+// frames them and sizes what it adds (strokes, the source arrow, labels, markers). Drawing a lens
+// face as a circular arc from its radius and semi-diameter is geometry of the picture, not physics.
 //
 // Output is deterministic: coordinates are written with fixed decimals (one for pixel drawings, two
 // for the plan), everything is drawn in slice order, never map order, and non-finite numbers are

@@ -148,6 +148,13 @@ func fixtureReport() *optics.Report {
 	}
 }
 
+// boarded gives r the board the analysis would: the table and source of b around r's own
+// positions. It returns r.
+func boarded(b *optics.Bench, r *optics.Report) *optics.Report {
+	r.Board = layout.NewBoard(b.Table, b.Source, r)
+	return r
+}
+
 // holesFor is the hole grid the analysis reports for a table; the counting rule itself is tested
 // in optics/layout.
 func holesFor(t optics.Table) optics.HoleGrid {

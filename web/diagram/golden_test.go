@@ -54,11 +54,11 @@ func TestGoldenFixture(t *testing.T) {
 			return Side(r, SideOptions{Exaggeration: 4, ShowParaxial: true, WidthPX: 800, HeightPX: 420})
 		}},
 		{"side-empty.svg", func() []byte { return Side(&optics.Report{}, SideOptions{}) }},
-		{"table-fixture.svg", func() []byte { return Table(b, r, TableOptions{}) }},
+		{"table-fixture.svg", func() []byte { return Table(boarded(b, r), TableOptions{}) }},
 		{"table-empty.svg", func() []byte {
-			return Table(emptyBench, &optics.Report{Holes: holesFor(emptyBench.Table)}, TableOptions{WidthPX: 480})
+			return Table(boarded(emptyBench, &optics.Report{Holes: holesFor(emptyBench.Table)}), TableOptions{WidthPX: 480})
 		}},
-		{"plan-fixture.svg", func() []byte { return Plan(b, r) }},
+		{"plan-fixture.svg", func() []byte { return Plan(boarded(b, r)) }},
 	}
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {
@@ -90,8 +90,8 @@ func TestGoldenDemo(t *testing.T) {
 		draw func() []byte
 	}{
 		{"side-demo.svg", func() []byte { return Side(r, SideOptions{Exaggeration: 8, ShowParaxial: true}) }},
-		{"table-demo.svg", func() []byte { return Table(b, r, TableOptions{}) }},
-		{"plan-demo.svg", func() []byte { return Plan(b, r) }},
+		{"table-demo.svg", func() []byte { return Table(boarded(b, r), TableOptions{}) }},
+		{"plan-demo.svg", func() []byte { return Plan(boarded(b, r)) }},
 	}
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {

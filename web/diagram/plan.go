@@ -31,24 +31,18 @@ const (
 // height in mm and a viewBox in mm, so one user unit is one millimetre on paper. It adds a 100 mm
 // check bar, hole columns and rows numbered along the front and left edges, each post marked with
 // its element id, the list of posts with their holes, the warnings and the laser cautions.
-func Plan(b *optics.Bench, r *optics.Report) []byte {
+func Plan(r *optics.Report) []byte {
 	if r == nil {
 		r = &optics.Report{}
 	}
-	t := newTableScene(b, r)
+	t := newTableScene(r)
 	t.st = sceneStyle{s: 1, line: 0.3, font: planFontMM, marker: 2.6, minHalf: 1.5, postLabels: true}
 	w := math.Max(t.widthMM()+2*planMarginMM+planRowLabelMM, planMinWidthMM)
 	textW := w - 2*planMarginMM
 	chars := min(int(textW/(0.52*planFontMM)), planMaxChars)
 	boxW := math.Min(textW, float64(planMaxChars)*0.52*planFontMM+6)
 
-	title := ""
-	if b != nil {
-		title = b.Title
-	}
-	if title == "" {
-		title = r.Title
-	}
+	title := r.Title
 	label := "Bench plan"
 	if title != "" {
 		label += ": " + title
@@ -74,7 +68,7 @@ func Plan(b *optics.Bench, r *optics.Report) []byte {
 	p.start(w, h, "mm", label)
 	p.rect(0, 0, w, h, `fill="#ffffff"`)
 	p.text(planMarginMM, planMarginMM+5, label, `font-size="5.5"`, `font-weight="bold"`, `fill="#000000"`)
-	p.text(planMarginMM, planMarginMM+11, tableCaption(b, r)+"; 1 unit = 1 mm", attr("font-size", p.num(planFontMM)), `fill="#333333"`)
+	p.text(planMarginMM, planMarginMM+11, tableCaption(t.board)+"; 1 unit = 1 mm", attr("font-size", p.num(planFontMM)), `fill="#333333"`)
 	drawCheckBar(p, planMarginMM, planMarginMM+16)
 
 	p.viewport(t.ox, t.oy, t.widthMM(), t.depthMM())
@@ -123,20 +117,21 @@ func drawCheckBar(p *pen, x, y float64) {
 
 // drawHoleNumbers numbers the hole columns below the front edge and the rows left of the left edge.
 func drawHoleNumbers(p *pen, t *tableScene) {
-	g := t.grid
-	if g.cols == 0 || g.rows == 0 {
+	g := t.board.Holes
+	cols, rows := drawnHoles(g)
+	if cols == 0 || rows == 0 {
 		return
 	}
 	front := t.oy + t.depthMM()
 	p.group(`class="hole-numbers"`, `font-size="2.5"`, `fill="#555555"`, `text-anchor="middle"`)
-	for col := 1; col <= g.cols; col++ {
-		x, _ := t.pt(g.hole(col, 1))
+	for col := 1; col <= cols; col++ {
+		x, _ := t.pt(g.Hole(col, 1))
 		p.text(x, front+3.6, strconv.Itoa(col))
 	}
 	p.gend()
 	p.group(`class="hole-numbers"`, `font-size="2.5"`, `fill="#555555"`, `text-anchor="end"`)
-	for row := 1; row <= g.rows; row++ {
-		_, y := t.pt(g.hole(1, row))
+	for row := 1; row <= rows; row++ {
+		_, y := t.pt(g.Hole(1, row))
 		p.text(t.ox-1.5, y+0.9, strconv.Itoa(row))
 	}
 	p.gend()

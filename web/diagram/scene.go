@@ -3,6 +3,8 @@ package diagram
 import (
 	"math"
 
+	"gonum.org/v1/gonum/spatial/r2"
+
 	"raytable/optics"
 )
 
@@ -27,27 +29,25 @@ type sceneStyle struct {
 	postLabels bool    // label each post with its element id (plan) instead of the element stroke
 }
 
-// tableScene is the table seen from above, mapped to output coordinates with the front edge at the
-// bottom: output x grows with table x, output y shrinks as table y grows away from the viewer.
+// tableScene is the report's board (optics.Board) mapped to output coordinates with the front
+// edge at the bottom: output x grows with table x, output y shrinks as table y grows away from
+// the viewer.
 type tableScene struct {
-	b        *optics.Bench
 	r        *optics.Report
-	fp       foldedPath
-	min, max vec // region drawn, mm
+	board    *optics.Board
+	min, max r2.Vec // region drawn, mm
 	ox, oy   float64
 	st       sceneStyle
-	known    bool // the table has a size
-	grid     holeGrid
 	flagged  map[string]bool
 }
 
-func newTableScene(b *optics.Bench, r *optics.Report) *tableScene {
-	t := &tableScene{b: b, r: r, fp: newFoldedPath(b, r)}
-	if b != nil {
-		t.known = finite(b.Table.WidthMM, b.Table.DepthMM) && b.Table.WidthMM > 0 && b.Table.DepthMM > 0
-		if t.known && r != nil {
-			t.grid = holesOf(r.Holes)
-		}
+// noBoard stands in for the board of a report that has none: no table, no path, nothing placed.
+var noBoard = &optics.Board{}
+
+func newTableScene(r *optics.Report) *tableScene {
+	t := &tableScene{r: r, board: r.Board}
+	if t.board == nil {
+		t.board = noBoard
 	}
 	t.region()
 	t.flagged = flaggedMounts(r)
@@ -56,55 +56,56 @@ func newTableScene(b *optics.Bench, r *optics.Report) *tableScene {
 
 // region is the table plus any content off it (with a margin), or the content alone.
 func (t *tableScene) region() {
-	lo, hi := vec{math.Inf(1), math.Inf(1)}, vec{math.Inf(-1), math.Inf(-1)}
-	grow := func(v vec, pad float64) {
-		if !v.finite() {
+	bd := t.board
+	lo, hi := r2.Vec{X: math.Inf(1), Y: math.Inf(1)}, r2.Vec{X: math.Inf(-1), Y: math.Inf(-1)}
+	grow := func(v r2.Vec, pad float64) {
+		if !finiteVec(v) {
 			return
 		}
-		lo = vec{math.Min(lo.x, v.x-pad), math.Min(lo.y, v.y-pad)}
-		hi = vec{math.Max(hi.x, v.x+pad), math.Max(hi.y, v.y+pad)}
+		lo = r2.Vec{X: math.Min(lo.X, v.X-pad), Y: math.Min(lo.Y, v.Y-pad)}
+		hi = r2.Vec{X: math.Max(hi.X, v.X+pad), Y: math.Max(hi.Y, v.Y+pad)}
 	}
-	if t.known {
-		grow(vec{0, 0}, 0)
-		grow(vec{t.b.Table.WidthMM, t.b.Table.DepthMM}, 0)
+	if bd.SizeKnown() {
+		grow(r2.Vec{}, 0)
+		grow(r2.Vec{X: bd.WidthMM, Y: bd.DepthMM}, 0)
 	}
-	pad := func(v vec) {
-		if t.known && v.x >= 0 && v.y >= 0 && v.x <= t.b.Table.WidthMM && v.y <= t.b.Table.DepthMM {
+	pad := func(v r2.Vec) {
+		if bd.SizeKnown() && v.X >= 0 && v.Y >= 0 && v.X <= bd.WidthMM && v.Y <= bd.DepthMM {
 			return
 		}
 		grow(v, regionPadMM)
 	}
-	for _, n := range t.fp.nodes {
-		pad(n.pos)
+	for _, n := range bd.Path {
+		pad(n.At)
 	}
-	for _, p := range t.r.Placement {
-		for _, c := range footprint(p) {
+	for _, m := range bd.Mounts {
+		for _, c := range m.Corners {
 			pad(c)
 		}
 	}
-	if !lo.finite() || !hi.finite() {
-		lo, hi = vec{0, 0}, vec{100, 100}
+	if !finiteVec(lo) || !finiteVec(hi) {
+		lo, hi = r2.Vec{}, r2.Vec{X: 100, Y: 100}
 	}
-	if hi.x-lo.x < 50 {
-		c := (hi.x + lo.x) / 2
-		lo.x, hi.x = c-25, c+25
+	if hi.X-lo.X < 50 {
+		c := (hi.X + lo.X) / 2
+		lo.X, hi.X = c-25, c+25
 	}
-	if hi.y-lo.y < 50 {
-		c := (hi.y + lo.y) / 2
-		lo.y, hi.y = c-25, c+25
+	if hi.Y-lo.Y < 50 {
+		c := (hi.Y + lo.Y) / 2
+		lo.Y, hi.Y = c-25, c+25
 	}
 	t.min, t.max = lo, hi
 }
 
-func (t *tableScene) widthMM() float64 { return t.max.x - t.min.x }
-func (t *tableScene) depthMM() float64 { return t.max.y - t.min.y }
+func (t *tableScene) widthMM() float64 { return t.max.X - t.min.X }
+func (t *tableScene) depthMM() float64 { return t.max.Y - t.min.Y }
 
 // pt maps a table point (mm) to output coordinates.
-func (t *tableScene) pt(v vec) (x, y float64) {
-	return t.ox + (v.x-t.min.x)*t.st.s, t.oy + (t.max.y-v.y)*t.st.s
+func (t *tableScene) pt(v r2.Vec) (x, y float64) {
+	return t.ox + (v.X-t.min.X)*t.st.s, t.oy + (t.max.Y-v.Y)*t.st.s
 }
 
-func (t *tableScene) poly(vs []vec) (xs, ys []float64) {
+func (t *tableScene) poly(vs []r2.Vec) (xs, ys []float64) {
 	for _, v := range vs {
 		x, y := t.pt(v)
 		xs, ys = append(xs, x), append(ys, y)
@@ -112,15 +113,7 @@ func (t *tableScene) poly(vs []vec) (xs, ys []float64) {
 	return xs, ys
 }
 
-// footprint is the mount rectangle of a placement: depth along its heading, width across, centred
-// on the post.
-func footprint(p optics.Placement) []vec {
-	u := heading(p.HeadingDeg)
-	v := u.perp()
-	c := vec{p.TableXMM, p.TableYMM}
-	du, dv := u.scale(p.MountDepthMM/2), v.scale(p.MountWidthMM/2)
-	return []vec{c.add(du).sub(dv), c.add(du).add(dv), c.sub(du).add(dv), c.sub(du).sub(dv)}
-}
+func finiteVec(v r2.Vec) bool { return finite(v.X, v.Y) }
 
 // flaggedMounts names the elements whose footprints a collision warning involves: the warning's
 // element and every element id its message names as a whole word.
@@ -143,36 +136,43 @@ func flaggedMounts(r *optics.Report) map[string]bool {
 	return flagged
 }
 
+// elements is how many of the report's elements have a place on the board, index for index (all
+// of them on a board laid out for the report).
+func (t *tableScene) elements() int { return min(len(t.r.Elements), len(t.board.Elements)) }
+
+// mounts is how many of the report's placements have a footprint on the board, index for index.
+func (t *tableScene) mounts() int { return min(len(t.r.Placement), len(t.board.Mounts)) }
+
 // position finds an element's table position by id: the element's first vertex, else its post.
-func (t *tableScene) position(id string) (vec, bool) {
-	for _, e := range t.r.Elements {
-		if e.ID == id {
-			return vec{e.TableXMM, e.TableYMM}, true
+func (t *tableScene) position(id string) (r2.Vec, bool) {
+	for i := range t.elements() {
+		if t.r.Elements[i].ID == id {
+			return t.board.Elements[i].At, true
 		}
 	}
-	for _, p := range t.r.Placement {
-		if p.ID == id {
-			return vec{p.TableXMM, p.TableYMM}, true
+	for i := range t.mounts() {
+		if t.r.Placement[i].ID == id {
+			return t.board.Mounts[i].Post, true
 		}
 	}
-	return vec{}, false
+	return r2.Vec{}, false
 }
 
 // draw renders the table: outline, holes, footprints, beam band, path, source, elements, labels
 // and warning markers, in that order (later on top).
 func (t *tableScene) draw(p *pen) {
-	st := t.st
-	if t.known {
-		x, y := t.pt(vec{0, t.b.Table.DepthMM})
-		p.rect(x, y, t.b.Table.WidthMM*st.s, t.b.Table.DepthMM*st.s, `fill="#f3f3ee"`, `stroke="#7d7d7d"`, attr("stroke-width", p.num(st.line*1.5)))
+	st, bd := t.st, t.board
+	if bd.SizeKnown() {
+		x, y := t.pt(r2.Vec{Y: bd.DepthMM})
+		p.rect(x, y, bd.WidthMM*st.s, bd.DepthMM*st.s, `fill="#f3f3ee"`, `stroke="#7d7d7d"`, attr("stroke-width", p.num(st.line*1.5)))
 	}
 	t.drawHoles(p)
 	t.drawFootprints(p)
 	t.drawBeam(p)
 	t.drawSource(p)
 	p.group(`class="elements"`)
-	for i := range t.r.Elements {
-		t.drawElement(p, &t.r.Elements[i])
+	for i := range t.elements() {
+		t.drawElement(p, &t.r.Elements[i], &bd.Elements[i])
 	}
 	p.gend()
 	if st.postLabels {
@@ -184,15 +184,16 @@ func (t *tableScene) draw(p *pen) {
 }
 
 func (t *tableScene) drawHoles(p *pen) {
-	g := t.grid
-	if g.cols == 0 || g.rows == 0 {
+	g := t.board.Holes
+	cols, rows := drawnHoles(g)
+	if cols == 0 || rows == 0 {
 		return
 	}
 	p.group(`class="holes"`, `fill="#c9c9c2"`)
-	for row := 1; row <= g.rows; row++ {
-		for col := 1; col <= g.cols; col++ {
-			x, y := t.pt(g.hole(col, row))
-			p.circle(x, y, g.radius*t.st.s)
+	for row := 1; row <= rows; row++ {
+		for col := 1; col <= cols; col++ {
+			x, y := t.pt(g.Hole(col, row))
+			p.circle(x, y, t.board.HoleRadiusMM*t.st.s)
 		}
 	}
 	p.gend()
@@ -202,11 +203,12 @@ func (t *tableScene) drawFootprints(p *pen) {
 	lw := p.num(t.st.line)
 	p.group(`class="mounts"`)
 	defer p.gend()
-	for _, pl := range t.r.Placement {
+	for i := range t.mounts() {
+		pl := &t.r.Placement[i]
 		if !finite(pl.TableXMM, pl.TableYMM, pl.HeadingDeg, pl.MountWidthMM, pl.MountDepthMM) || pl.MountWidthMM <= 0 || pl.MountDepthMM <= 0 {
 			continue
 		}
-		xs, ys := t.poly(footprint(pl))
+		xs, ys := t.poly(t.board.Mounts[i].Corners[:])
 		if t.flagged[pl.ID] {
 			p.polygon(xs, ys, `fill="#f6c9c9"`, `fill-opacity="0.8"`, `stroke="#c62828"`, attr("stroke-width", p.num(2*t.st.line)))
 			continue
@@ -234,20 +236,21 @@ func (t *tableScene) endsTerminated() bool {
 
 func (t *tableScene) drawBeam(p *pen) {
 	c := t.primaryColor()
-	if t.r.Beam != nil {
-		bands := t.fp.bands(t.r.Beam.Samples)
-		if len(bands) > 0 {
-			p.group(`class="beam"`, attr("fill", c), `fill-opacity="0.3"`, `stroke="none"`)
-			for _, band := range bands {
-				xs, ys := t.poly(band)
-				p.polygon(xs, ys)
-			}
-			p.gend()
+	bd := t.board
+	if t.r.Beam != nil && len(bd.Band) > 0 {
+		p.group(`class="beam"`, attr("fill", c), `fill-opacity="0.3"`, `stroke="none"`)
+		for _, band := range bd.Band {
+			xs, ys := t.poly(band)
+			p.polygon(xs, ys)
 		}
+		p.gend()
 	}
-	var path []vec
-	for _, n := range t.fp.nodes {
-		path = append(path, n.pos)
+	if len(bd.Path) == 0 {
+		return
+	}
+	path := make([]r2.Vec, len(bd.Path))
+	for i, n := range bd.Path {
+		path[i] = n.At
 	}
 	xs, ys := t.poly(path)
 	p.polyline(xs, ys, `class="beam-path"`, `fill="none"`, attr("stroke", c), attr("stroke-width", p.num(1.2*t.st.line)), `stroke-linejoin="round"`)
@@ -255,24 +258,24 @@ func (t *tableScene) drawBeam(p *pen) {
 		return
 	}
 	// The beam goes on: show where it leaves the drawn region, dashed.
-	last := t.fp.nodes[len(t.fp.nodes)-1].pos
-	end := last.add(t.fp.tailDir.scale(t.exitDistance(last, t.fp.tailDir)))
-	xs, ys = t.poly([]vec{last, end})
+	last := path[len(path)-1]
+	end := r2.Add(last, r2.Scale(t.exitDistance(last, bd.TailDir), bd.TailDir))
+	xs, ys = t.poly([]r2.Vec{last, end})
 	p.polyline(xs, ys, `class="beam-runs-on"`, `fill="none"`, attr("stroke", c), attr("stroke-width", p.num(1.2*t.st.line)), attr("stroke-dasharray", p.num(4*t.st.line)+" "+p.num(3*t.st.line)))
 }
 
 // exitDistance is how far from a point inside the region a ray along d runs before leaving it.
-func (t *tableScene) exitDistance(a, d vec) float64 {
+func (t *tableScene) exitDistance(a, d r2.Vec) float64 {
 	best := math.Inf(1)
-	if d.x > 1e-12 {
-		best = math.Min(best, (t.max.x-a.x)/d.x)
-	} else if d.x < -1e-12 {
-		best = math.Min(best, (t.min.x-a.x)/d.x)
+	if d.X > 1e-12 {
+		best = math.Min(best, (t.max.X-a.X)/d.X)
+	} else if d.X < -1e-12 {
+		best = math.Min(best, (t.min.X-a.X)/d.X)
 	}
-	if d.y > 1e-12 {
-		best = math.Min(best, (t.max.y-a.y)/d.y)
-	} else if d.y < -1e-12 {
-		best = math.Min(best, (t.min.y-a.y)/d.y)
+	if d.Y > 1e-12 {
+		best = math.Min(best, (t.max.Y-a.Y)/d.Y)
+	} else if d.Y < -1e-12 {
+		best = math.Min(best, (t.min.Y-a.Y)/d.Y)
 	}
 	if !finite(best) || best < 0 {
 		return 0
@@ -280,34 +283,37 @@ func (t *tableScene) exitDistance(a, d vec) float64 {
 	return best
 }
 
+// drawSource draws an arrowhead ending at the source, pointing along the beam, and its label.
 func (t *tableScene) drawSource(p *pen) {
-	a := t.fp.nodes[0].pos
-	d := t.fp.dir(0)
-	if len(t.fp.nodes) == 1 {
-		d = t.fp.tailDir
+	bd := t.board
+	if len(bd.Path) == 0 {
+		return
 	}
+	tip, d := bd.Path[0].At, bd.SourceDir
 	size := 2.5 * t.st.minHalf / t.st.s
-	n := d.perp()
-	tip := a
-	back := a.sub(d.scale(2 * size))
-	xs, ys := t.poly([]vec{tip, back.add(n.scale(size)), back.sub(n.scale(size))})
+	n := perp(d)
+	back := r2.Sub(tip, r2.Scale(2*size, d))
+	xs, ys := t.poly([]r2.Vec{tip, r2.Add(back, r2.Scale(size, n)), r2.Sub(back, r2.Scale(size, n))})
 	p.polygon(xs, ys, `fill="#222222"`)
 	x, y := t.pt(back)
 	p.text(x, y-size*t.st.s-0.5*t.st.font, "source", attr("font-size", p.num(t.st.font)), `fill="#222222"`)
 }
 
+// perp turns a direction on the table by 90° counter-clockwise seen from above.
+func perp(v r2.Vec) r2.Vec { return r2.Vec{X: -v.Y, Y: v.X} }
+
 // drawPosts marks each post with a small cross and the element id (plan).
 func (t *tableScene) drawPosts(p *pen) {
 	r := 1.5 * t.st.s
 	p.group(attr("font-size", p.num(t.st.font)), `fill="#1a1a1a"`)
-	for _, pl := range t.r.Placement {
-		c := vec{pl.TableXMM, pl.TableYMM}
-		if !c.finite() {
+	for i := range t.mounts() {
+		c := t.board.Mounts[i].Post
+		if !finiteVec(c) {
 			continue
 		}
 		x, y := t.pt(c)
 		p.cross(x, y, r, `stroke="#000000"`, attr("stroke-width", p.num(t.st.line)))
-		p.text(x+r+0.6*t.st.s, y-r-0.6*t.st.s, pl.ID)
+		p.text(x+r+0.6*t.st.s, y-r-0.6*t.st.s, t.r.Placement[i].ID)
 	}
 	p.gend()
 }
@@ -321,7 +327,7 @@ func (t *tableScene) drawWarningMarkers(p *pen) {
 	defer p.gend()
 	for i, w := range t.r.Warnings {
 		pos, ok := t.position(w.Element)
-		if w.Element == "" || !ok || !pos.finite() {
+		if w.Element == "" || !ok || !finiteVec(pos) {
 			continue
 		}
 		k := count[w.Element]

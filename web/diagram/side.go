@@ -91,19 +91,34 @@ func maxFinite(a, b float64) float64 {
 	return math.Max(a, b)
 }
 
-func newSideFrame(r *optics.Report, o SideOptions) *sideFrame {
-	f := &sideFrame{w: defaultSideWidthPX, h: defaultSideHeightPX, exag: 1}
+// sideSize is the side view's canvas in px at options o.
+func sideSize(o SideOptions) (w, h float64) {
+	w, h = defaultSideWidthPX, defaultSideHeightPX
 	if o.WidthPX > 0 {
-		f.w = math.Max(float64(o.WidthPX), minSideWidthPX)
+		w = math.Max(float64(o.WidthPX), minSideWidthPX)
 	}
 	if o.HeightPX > 0 {
-		f.h = math.Max(float64(o.HeightPX), minSideHeightPX)
+		h = math.Max(float64(o.HeightPX), minSideHeightPX)
 	}
+	return w, h
+}
+
+// SidePlotHeightPX is the height in px of the side view's plot at options o: the canvas less the
+// title and element labels above the plot and the scale bar and legend below it. The page sizes
+// its vertical exaggeration to it.
+func SidePlotHeightPX(o SideOptions) float64 {
+	_, h := sideSize(o)
+	return h - sideTopPX - sideBottomPX
+}
+
+func newSideFrame(r *optics.Report, o SideOptions) *sideFrame {
+	f := &sideFrame{exag: 1}
+	f.w, f.h = sideSize(o)
 	if o.Exaggeration > 1 && finite(o.Exaggeration) {
 		f.exag = o.Exaggeration
 	}
 	f.left, f.top = sideMarginPX, sideTopPX
-	f.pw, f.ph = f.w-2*sideMarginPX, f.h-sideTopPX-sideBottomPX
+	f.pw, f.ph = f.w-2*sideMarginPX, SidePlotHeightPX(o)
 
 	f.zFit = PathLengthMM(r)
 	if o.ZMaxMM > 0 && finite(o.ZMaxMM) {

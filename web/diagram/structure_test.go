@@ -20,8 +20,8 @@ func TestEscaping(t *testing.T) {
 	b.Title = r.Title
 	for name, out := range map[string][]byte{
 		"side":  Side(r, SideOptions{}),
-		"table": Table(b, r, TableOptions{}),
-		"plan":  Plan(b, r),
+		"table": Table(boarded(b, r), TableOptions{}),
+		"plan":  Plan(boarded(b, r)),
 	} {
 		root := parseSVG(t, out)
 		if !strings.Contains(root.attr("aria-label"), `a<b & "c"`) {
@@ -50,8 +50,8 @@ func TestControlCharactersStayWellFormed(t *testing.T) {
 	b.Title = r.Title
 	for name, out := range map[string][]byte{
 		"side":  Side(r, SideOptions{}),
-		"table": Table(b, r, TableOptions{}),
-		"plan":  Plan(b, r),
+		"table": Table(boarded(b, r), TableOptions{}),
+		"plan":  Plan(boarded(b, r)),
 	} {
 		root := parseSVG(t, out) // strict: fails on a forbidden character
 		if got, want := root.attr("aria-label"), "a\uFFFDb\uFFFDc\uFFFDd"; !strings.HasSuffix(got, want) {
@@ -80,8 +80,8 @@ func TestNoNonFiniteNumbers(t *testing.T) {
 	b.Table.HoleOffsetMM = fp(nan)
 	for name, out := range map[string][]byte{
 		"side":     Side(r, SideOptions{Exaggeration: nan, MMPerPX: nan, ZMaxMM: inf}),
-		"table":    Table(b, r, TableOptions{MMPerPX: inf}),
-		"plan":     Plan(b, r),
+		"table":    Table(boarded(b, r), TableOptions{MMPerPX: inf}),
+		"plan":     Plan(boarded(b, r)),
 		"paraxial": Side(r, SideOptions{ShowParaxial: true}),
 	} {
 		parseSVG(t, out)
@@ -105,15 +105,15 @@ func TestEmptyInputs(t *testing.T) {
 	noRays.Rays, noRays.Beam = nil, nil
 	cases := map[string][]byte{
 		"side nil":           Side(nil, SideOptions{}),
-		"table nil":          Table(nil, nil, TableOptions{}),
-		"plan nil":           Plan(nil, nil),
+		"table nil":          Table(nil, TableOptions{}),
+		"plan nil":           Plan(nil),
 		"side empty":         Side(&optics.Report{}, SideOptions{ShowParaxial: true, Exaggeration: 10}),
-		"table no bench":     Table(nil, fixtureReport(), TableOptions{}),
-		"plan no table size": Plan(&optics.Bench{}, fixtureReport()),
+		"table no bench":     Table(fixtureReport(), TableOptions{}),
+		"plan no table size": Plan(boarded(&optics.Bench{}, fixtureReport())),
 		"side unlimited":     Side(unlimited, SideOptions{}),
-		"table unlimited":    Table(fixtureBench(), unlimited, TableOptions{}),
+		"table unlimited":    Table(boarded(fixtureBench(), unlimited), TableOptions{}),
 		"side no rays":       Side(noRays, SideOptions{ShowParaxial: true}),
-		"table no rays":      Table(fixtureBench(), noRays, TableOptions{}),
+		"table no rays":      Table(boarded(fixtureBench(), noRays), TableOptions{}),
 	}
 	for name, out := range cases {
 		parseSVG(t, out)

@@ -10,7 +10,7 @@ import (
 type TableOptions struct {
 	WidthPX int     // 0: 960 when fitting; with MMPerPX the width follows the table
 	MMPerPX float64 // 0: fit the table to the width; otherwise a fixed scale shared by several drawings
-	Title   string  // "" uses the bench's title
+	Title   string  // "" uses the report's title
 }
 
 const (
@@ -22,13 +22,13 @@ const (
 	maxWarningLines     = 14
 )
 
-// TableMMPerPX is the scale (mm per px) Table would fit for b and r with options o; the compare
-// page passes the larger of two as TableOptions.MMPerPX so both drawings share one scale.
-func TableMMPerPX(b *optics.Bench, r *optics.Report, o TableOptions) float64 {
+// TableMMPerPX is the scale (mm per px) Table would fit for r with options o; the compare page
+// passes the larger of two as TableOptions.MMPerPX so both drawings share one scale.
+func TableMMPerPX(r *optics.Report, o TableOptions) float64 {
 	if r == nil {
 		r = &optics.Report{}
 	}
-	t := newTableScene(b, r)
+	t := newTableScene(r)
 	w := float64(defaultTableWidthPX)
 	if o.WidthPX > 0 {
 		w = math.Max(float64(o.WidthPX), minTableWidthPX)
@@ -36,17 +36,18 @@ func TableMMPerPX(b *optics.Bench, r *optics.Report, o TableOptions) float64 {
 	return t.widthMM() / (w - 2*tableMarginPX)
 }
 
-// Table draws the bench from above: the table outline with its hole grid, the mount footprints,
-// the folded beam path with the Gaussian envelope, the elements at their table positions and
-// headings with their ids, and the warnings in place (collision footprints outlined in red,
-// numbered markers listed in a legend). The front edge of the table is at the bottom. It returns a
-// standalone SVG document; the same inputs always give the same bytes.
-func Table(b *optics.Bench, r *optics.Report, o TableOptions) []byte {
+// Table draws the report's board (optics.Board) from above: the table outline with its hole grid,
+// the mount footprints, the folded beam path with the Gaussian envelope, the elements at their
+// table positions and headings with their ids, and the warnings in place (collision footprints
+// outlined in red, numbered markers listed in a legend). The front edge of the table is at the
+// bottom. A report without a board draws its warnings only. It returns a standalone SVG document;
+// the same inputs always give the same bytes.
+func Table(r *optics.Report, o TableOptions) []byte {
 	if r == nil {
 		r = &optics.Report{}
 	}
-	t := newTableScene(b, r)
-	mmPerPX := TableMMPerPX(b, r, o)
+	t := newTableScene(r)
+	mmPerPX := TableMMPerPX(r, o)
 	w := float64(defaultTableWidthPX)
 	if o.WidthPX > 0 {
 		w = math.Max(float64(o.WidthPX), minTableWidthPX)
@@ -78,9 +79,6 @@ func Table(b *optics.Bench, r *optics.Report, o TableOptions) []byte {
 	}
 
 	title := o.Title
-	if title == "" && b != nil {
-		title = b.Title
-	}
 	if title == "" {
 		title = r.Title
 	}
@@ -93,7 +91,7 @@ func Table(b *optics.Bench, r *optics.Report, o TableOptions) []byte {
 	p.start(w, h, "", label)
 	p.rect(0, 0, w, h, `fill="#ffffff"`)
 	p.text(tableMarginPX, 20, label, `font-size="14"`, `font-weight="bold"`, `fill="#222222"`)
-	p.text(w-tableMarginPX, 20, tableCaption(b, r), `font-size="11"`, `text-anchor="end"`, `fill="#555555"`)
+	p.text(w-tableMarginPX, 20, tableCaption(t.board), `font-size="11"`, `text-anchor="end"`, `fill="#555555"`)
 	p.viewport(tableMarginPX, tableTopPX, plotW, plotH)
 	t.draw(p)
 	p.endViewport()
@@ -112,17 +110,13 @@ func Table(b *optics.Bench, r *optics.Report, o TableOptions) []byte {
 }
 
 // tableCaption states the table size, grid and orientation.
-func tableCaption(b *optics.Bench, r *optics.Report) string {
-	if b == nil || !(b.Table.WidthMM > 0 && b.Table.DepthMM > 0) {
+func tableCaption(bd *optics.Board) string {
+	if !bd.SizeKnown() {
 		return "table size unknown; front at the bottom"
 	}
-	var g holeGrid
-	if r != nil {
-		g = holesOf(r.Holes)
-	}
-	s := fmtNum(b.Table.WidthMM) + " × " + fmtNum(b.Table.DepthMM) + " mm"
-	if g.cols > 0 {
-		s += ", " + itoa(g.cols) + " × " + itoa(g.rows) + " holes every " + fmtNum(g.pitch) + " mm"
+	s := fmtNum(bd.WidthMM) + " × " + fmtNum(bd.DepthMM) + " mm"
+	if cols, rows := drawnHoles(bd.Holes); cols > 0 {
+		s += ", " + itoa(cols) + " × " + itoa(rows) + " holes every " + fmtNum(bd.Holes.PitchMM) + " mm"
 	}
 	return s + "; front edge at the bottom"
 }

@@ -3,18 +3,10 @@ package diagram
 import (
 	"math"
 
+	"gonum.org/v1/gonum/spatial/r2"
+
 	"raytable/optics"
 )
-
-// across is the direction of an element's stroke on the table: across the arriving beam, or along
-// a mirror's surface (perpendicular to d_out - d_in).
-func across(e *optics.ElementPlace) vec {
-	in := heading(e.HeadingInDeg)
-	if e.Type == optics.TypeMirror {
-		return heading(e.HeadingOutDeg).sub(in).unit(in).perp()
-	}
-	return in.perp()
-}
 
 // bladeMM is the length of an aperture's blades on the table beyond its opening.
 func (t *tableScene) bladeMM(open float64) float64 { return math.Max(8, open) + t.st.minHalf/t.st.s }
@@ -40,23 +32,25 @@ func (t *tableScene) halfMM(e *optics.ElementPlace) float64 {
 	return math.Max(h, t.st.minHalf/t.st.s)
 }
 
-func (t *tableScene) drawElement(p *pen, e *optics.ElementPlace) {
-	pos := vec{e.TableXMM, e.TableYMM}
-	if !pos.finite() {
+// drawElement draws element e at its place on the board, be: a stroke along each face, an
+// aperture's two blades, a dump's block.
+func (t *tableScene) drawElement(p *pen, e *optics.ElementPlace, be *optics.BoardElement) {
+	pos := be.At
+	if !finiteVec(pos) {
 		return
 	}
-	in, ac, h := heading(e.HeadingInDeg), across(e), t.halfMM(e)
-	stroke := func(c vec, half float64, attrs ...string) {
-		xs, ys := t.poly([]vec{c.sub(ac.scale(half)), c.add(ac.scale(half))})
+	in, ac, h := be.In, be.Across, t.halfMM(e)
+	stroke := func(c r2.Vec, half float64, attrs ...string) {
+		xs, ys := t.poly([]r2.Vec{r2.Sub(c, r2.Scale(half, ac)), r2.Add(c, r2.Scale(half, ac))})
 		p.polyline(xs, ys, attrs...)
 	}
 	w := func(k float64) string { return attr("stroke-width", p.num(k*t.st.line)) }
 	switch e.Type {
 	case optics.TypeLens:
-		for _, f := range e.Faces {
-			stroke(pos.add(in.scale(f.PathMM-e.PathMM)), h, `stroke="#3b6e8f"`, w(2))
+		for _, f := range be.Faces {
+			stroke(f, h, `stroke="#3b6e8f"`, w(2))
 		}
-		if len(e.Faces) == 0 {
+		if len(be.Faces) == 0 {
 			stroke(pos, h, `stroke="#3b6e8f"`, w(2))
 		}
 	case optics.TypeThinLens:
@@ -70,15 +64,16 @@ func (t *tableScene) drawElement(p *pen, e *optics.ElementPlace) {
 		}
 		blade := t.bladeMM(open)
 		for _, sgn := range []float64{1, -1} {
-			a, b := pos.add(ac.scale(sgn*open)), pos.add(ac.scale(sgn*(open+blade)))
-			xs, ys := t.poly([]vec{a, b})
+			a, b := r2.Add(pos, r2.Scale(sgn*open, ac)), r2.Add(pos, r2.Scale(sgn*(open+blade), ac))
+			xs, ys := t.poly([]r2.Vec{a, b})
 			p.polyline(xs, ys, `stroke="#303030"`, w(2.5))
 		}
 	case optics.TypeScreen:
 		stroke(pos, h, `stroke="#5d5d5d"`, w(3))
 	case optics.TypeDump:
 		s := math.Max(5, t.st.minHalf/t.st.s)
-		xs, ys := t.poly([]vec{pos.add(ac.scale(s)), pos.add(ac.scale(s)).add(in.scale(2 * s)), pos.sub(ac.scale(s)).add(in.scale(2 * s)), pos.sub(ac.scale(s))})
+		side, depth := r2.Scale(s, ac), r2.Scale(2*s, in)
+		xs, ys := t.poly([]r2.Vec{r2.Add(pos, side), r2.Add(r2.Add(pos, side), depth), r2.Add(r2.Sub(pos, side), depth), r2.Sub(pos, side)})
 		p.polygon(xs, ys, `fill="#262626"`)
 	default:
 		stroke(pos, h, `stroke="#888888"`, w(1))
@@ -88,14 +83,12 @@ func (t *tableScene) drawElement(p *pen, e *optics.ElementPlace) {
 // drawLabels writes each element id beside its stroke, on the left of the arriving beam.
 func (t *tableScene) drawLabels(p *pen) {
 	p.group(attr("font-size", p.num(t.st.font)), `fill="#1a1a1a"`, `text-anchor="middle"`)
-	for i := range t.r.Elements {
-		e := &t.r.Elements[i]
-		pos := vec{e.TableXMM, e.TableYMM}
-		if !pos.finite() {
+	for i := range t.elements() {
+		e, be := &t.r.Elements[i], &t.board.Elements[i]
+		if !finiteVec(be.At) {
 			continue
 		}
-		ac := across(e)
-		at := pos.add(ac.scale(t.extentMM(e) + 1.2*t.st.font/t.st.s))
+		at := r2.Add(be.At, r2.Scale(t.extentMM(e)+1.2*t.st.font/t.st.s, be.Across))
 		x, y := t.pt(at)
 		p.text(x, y+0.35*t.st.font, e.ID)
 	}

@@ -31,7 +31,7 @@ func TestTableHoles(t *testing.T) {
 			b.Table = c.table
 			r := fixtureReport()
 			r.Holes = holesFor(c.table)
-			for _, out := range [][]byte{Table(b, r, TableOptions{}), Plan(b, r)} {
+			for _, out := range [][]byte{Table(boarded(b, r), TableOptions{}), Plan(boarded(b, r))} {
 				root := parseSVG(t, out)
 				if got := root.count("holes", "circle"); got != c.cols*c.rows {
 					t.Errorf("hole circles = %d, want %d x %d = %d", got, c.cols, c.rows, c.cols*c.rows)
@@ -45,7 +45,7 @@ func TestTableHolePositions(t *testing.T) {
 	// The front-left hole of a metric table sits 12.5 mm from both edges (common practice); with
 	// the front edge at the bottom its centre is 12.5 mm above the table's bottom edge in the plan.
 	b := fixtureBench()
-	root := parseSVG(t, Plan(b, fixtureReport()))
+	root := parseSVG(t, Plan(boarded(b, fixtureReport())))
 	holes := root.byClass("holes")[0].Children
 	var table xnode
 	for _, r := range root.all(func(m xnode) bool { return m.XMLName.Local == "rect" && m.attr("fill") == "#f3f3ee" }) {
@@ -67,7 +67,7 @@ func TestTableHolePositions(t *testing.T) {
 
 func TestTableMountsAndWarnings(t *testing.T) {
 	b, r := fixtureBench(), fixtureReport()
-	root := parseSVG(t, Table(b, r, TableOptions{}))
+	root := parseSVG(t, Table(boarded(b, r), TableOptions{}))
 	mounts := root.byClass("mounts")[0].Children
 	if len(mounts) != len(r.Placement) {
 		t.Fatalf("footprints = %d, want one per placement = %d", len(mounts), len(r.Placement))
@@ -96,67 +96,9 @@ func TestTableMountsAndWarnings(t *testing.T) {
 	}
 }
 
-func TestMirrorFootprintTurns(t *testing.T) {
-	// A mirror's mount turns with its surface: a +x to +y fold has its normal at 135°, so a square
-	// footprint of side s stands as a diamond, corners on the table axes through the post at
-	// s/sqrt(2) (geometry).
-	const side, tol = 40.0, 1e-9
-	c := footprint(optics.Placement{TableXMM: 200, TableYMM: 100, HeadingDeg: 135, MountWidthMM: side, MountDepthMM: side})
-	d := side / math.Sqrt2
-	want := map[vec]bool{{200 - d, 100}: true, {200 + d, 100}: true, {200, 100 - d}: true, {200, 100 + d}: true}
-	for _, v := range c {
-		found := false
-		for w := range want {
-			if math.Abs(v.x-w.x) < tol && math.Abs(v.y-w.y) < tol {
-				found = true
-			}
-		}
-		if !found {
-			t.Errorf("corner %v is not on an axis through the post at %g mm", v, d)
-		}
-	}
-}
-
-func TestFootprintGeometry(t *testing.T) {
-	// A 40 x 20 mm mount heading 90° (+y): depth 20 along y, width 40 along x (geometry).
-	c := footprint(optics.Placement{TableXMM: 100, TableYMM: 50, HeadingDeg: 90, MountWidthMM: 40, MountDepthMM: 20})
-	minX, maxX, minY, maxY := math.Inf(1), math.Inf(-1), math.Inf(1), math.Inf(-1)
-	for _, v := range c {
-		minX, maxX = math.Min(minX, v.x), math.Max(maxX, v.x)
-		minY, maxY = math.Min(minY, v.y), math.Max(maxY, v.y)
-	}
-	const tol = 1e-9
-	if math.Abs(maxX-minX-40) > tol || math.Abs(maxY-minY-20) > tol || math.Abs((minX+maxX)/2-100) > tol || math.Abs((minY+maxY)/2-50) > tol {
-		t.Errorf("footprint spans x [%g, %g], y [%g, %g]; want x [80, 120], y [40, 60]", minX, maxX, minY, maxY)
-	}
-}
-
-func TestFoldedPathBands(t *testing.T) {
-	// Along the fixture's first stretch (+x at y = 100) the band is ±w around the path; after the
-	// 90° fold at M1 (path 150) it runs along +y at x = 200.
-	b, r := fixtureBench(), fixtureReport()
-	fp := newFoldedPath(b, r)
-	p := fp.at(fp.segment(120), 120)
-	if p != (vec{170, 100}) {
-		t.Errorf("path 120 mm is at %v, want {170 100}", p)
-	}
-	q := fp.at(fp.segment(180), 180)
-	if math.Abs(q.x-200) > 1e-9 || math.Abs(q.y-130) > 1e-9 {
-		t.Errorf("path 180 mm is at %v, want {200 130}", q)
-	}
-	bands := fp.bands(r.Beam.Samples)
-	if len(bands) == 0 {
-		t.Fatal("no bands")
-	}
-	first := bands[0] // source to L1 first face: w = 1 mm from the fixture
-	if first[0] != (vec{50, 101}) {
-		t.Errorf("band starts at %v, want {50 101} (1 mm left of the source)", first[0])
-	}
-}
-
 func TestPlanIsTrueSize(t *testing.T) {
 	b, r := fixtureBench(), fixtureReport()
-	root := parseSVG(t, Plan(b, r))
+	root := parseSVG(t, Plan(boarded(b, r)))
 	w, h := root.attr("width"), root.attr("height")
 	if !strings.HasSuffix(w, "mm") || !strings.HasSuffix(h, "mm") {
 		t.Fatalf("width %q height %q: want millimetres", w, h)
@@ -208,7 +150,7 @@ func TestPlanIsTrueSize(t *testing.T) {
 func TestMountInBeamFlagsOnlyTheMount(t *testing.T) {
 	b, r := fixtureBench(), fixtureReport()
 	r.Warnings = []optics.Warning{{Code: "mount-in-beam", Element: "T1", Message: "the beam from SC to D passes through the mount of T1"}}
-	root := parseSVG(t, Table(b, r, TableOptions{}))
+	root := parseSVG(t, Table(boarded(b, r), TableOptions{}))
 	var red []int
 	for i, m := range root.byClass("mounts")[0].Children {
 		if m.attr("stroke") == "#c62828" {

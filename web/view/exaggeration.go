@@ -7,10 +7,6 @@ import (
 	"raytable/web/diagram"
 )
 
-// sideChromePX is roughly the height the side view spends on its title, labels, scale bar and
-// legend; the rest is the plot that the heights must fit.
-const sideChromePX = 120
-
 // maxExaggeration keeps a nearly empty bench (tiny heights) from being stretched absurdly.
 const maxExaggeration = 500
 
@@ -40,7 +36,7 @@ func contentHalfMM(r *optics.Report) float64 {
 // would sit on the axis.
 func AutoExaggeration(r *optics.Report, o diagram.SideOptions) float64 {
 	half := contentHalfMM(r)
-	plotPX := float64(o.HeightPX - sideChromePX)
+	plotPX := diagram.SidePlotHeightPX(o)
 	if half <= 0 || plotPX <= 0 {
 		return 1
 	}

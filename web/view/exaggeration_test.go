@@ -39,7 +39,7 @@ func TestAutoExaggeration(t *testing.T) {
 	}
 	// Self-consistency: the stretched heights (with the 1.2 headroom) fit the plot height.
 	so.Exaggeration = e
-	plotPX := float64(pageSideHeightPX - sideChromePX)
+	plotPX := diagram.SidePlotHeightPX(so)
 	if used := 2 * 1.2 * semi * e / diagram.SideMMPerPX(thin, so); used > plotPX {
 		t.Errorf("stretched heights take %.1f px of a %.0f px plot", used, plotPX)
 	}

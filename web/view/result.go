@@ -53,10 +53,10 @@ func (o DrawOptions) Table() diagram.TableOptions {
 }
 
 // NewResult draws a computed bench: the side and table views inline, and the numbers.
-func NewResult(b *optics.Bench, r *optics.Report, o DrawOptions) Result {
+func NewResult(r *optics.Report, o DrawOptions) Result {
 	return Result{
 		SideSVG:  InlineSVG(diagram.Side(r, o.Side(r))),
-		TableSVG: InlineSVG(diagram.Table(b, r, o.Table())),
+		TableSVG: InlineSVG(diagram.Table(r, o.Table())),
 		Numbers:  NumbersPanel(r),
 	}
 }
@@ -71,12 +71,12 @@ func CompareSides(ba *optics.Bench, ra *optics.Report, bb *optics.Bench, rb *opt
 	so.ZMaxMM = math.Max(diagram.PathLengthMM(ra), diagram.PathLengthMM(rb))
 	so.MMPerPX = math.Max(diagram.SideMMPerPX(ra, so), diagram.SideMMPerPX(rb, so))
 	to := o.Table()
-	to.MMPerPX = math.Max(diagram.TableMMPerPX(ba, ra, to), diagram.TableMMPerPX(bb, rb, to))
+	to.MMPerPX = math.Max(diagram.TableMMPerPX(ra, to), diagram.TableMMPerPX(rb, to))
 	side := func(bench *optics.Bench, rep *optics.Report) CompareSide {
 		return CompareSide{
 			Title:    BenchTitle(bench),
 			SideSVG:  InlineSVG(diagram.Side(rep, so)),
-			TableSVG: InlineSVG(diagram.Table(bench, rep, to)),
+			TableSVG: InlineSVG(diagram.Table(rep, to)),
 		}
 	}
 	return side(ba, ra), side(bb, rb)
