@@ -4,6 +4,8 @@ import (
 	"bytes"
 	"encoding/json"
 	"testing"
+
+	"raytable/optics/internal/approx"
 )
 
 // TestDemoBoard: the analysis lays out the board from the report it computed, once, and keeps it
@@ -36,7 +38,7 @@ func TestDemoBoard(t *testing.T) {
 			cx, cy = cx+c.X/4, cy+c.Y/4
 		}
 		p := r.Placement[i]
-		if relErr(cx, p.TableXMM) > veryClose || relErr(cy, p.TableYMM) > veryClose {
+		if !approx.Mixed(cx, p.TableXMM, approx.VeryClose) || !approx.Mixed(cy, p.TableYMM, approx.VeryClose) {
 			t.Errorf("%s: footprint centred on (%g, %g), post at (%g, %g)", p.ID, cx, cy, p.TableXMM, p.TableYMM)
 		}
 	}
