@@ -5,6 +5,7 @@ import (
 	"math"
 
 	"raytable/optics"
+	"raytable/optics/numfmt"
 	"raytable/optics/paraxial"
 	"raytable/optics/trace"
 )
@@ -93,4 +94,4 @@ func stopMessage(e *optics.Element, status string, n, total int) string {
 func vec(v trace.Vec) [3]float64 { return [3]float64{v.X, v.Y, v.Z} }
 
 // num formats a length compactly: 25.4, 0.04, 150.
-func num(v float64) string { return fmt.Sprintf("%.4g", v) }
+var num = numfmt.Brief.Format

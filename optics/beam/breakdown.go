@@ -6,6 +6,7 @@ import (
 	"math/cmplx"
 
 	"raytable/optics"
+	"raytable/optics/numfmt"
 )
 
 // CodeNotParaxial is the warning given instead of beam numbers when the beam leaves the paraxial
@@ -57,7 +58,7 @@ func notParaxialWarning(p *optics.Path, surface int, angleRad float64) optics.Wa
 	}
 	angle := "an unbounded angle"
 	if !math.IsInf(angleRad, 0) {
-		angle = fmt.Sprintf("%.3g rad", angleRad)
+		angle = numfmt.Rough.Format(angleRad) + " rad"
 	}
 	return optics.Warning{Code: CodeNotParaxial, Element: id, Message: fmt.Sprintf(
 		"the Gaussian beam diverges with %s %s, beyond the %.1f rad where the paraxial beam model holds; no beam numbers are given: focus less tightly or check focal lengths and M²",

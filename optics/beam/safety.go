@@ -5,6 +5,7 @@ import (
 	"math"
 
 	"raytable/optics"
+	"raytable/optics/numfmt"
 	"raytable/optics/paraxial"
 )
 
@@ -216,7 +217,7 @@ func mm(d float64) string {
 	if math.Abs(d) < 0.01 {
 		return "less than 0.01 mm"
 	}
-	return fmt.Sprintf("%.3g mm", d)
+	return numfmt.Rough.Format(d) + " mm"
 }
 
 // warnSet collects warnings, one per code and key (an element, or a face), noting which planes

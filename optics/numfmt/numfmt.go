@@ -19,6 +19,12 @@ const (
 	Field
 	// Message is four significant digits, then written as Exact: computed values in messages.
 	Message
+	// Brief is four significant digits as %g writes them (an exponent below 1e-4 and from 1e4):
+	// sizes in the ray and screen warnings.
+	Brief
+	// Rough is three significant digits as %g writes them: distances and angles in the beam's
+	// safety and breakdown warnings.
+	Rough
 	// Report is six significant digits as %g writes them (an exponent below 1e-4 and from 1e6):
 	// the text report.
 	Report
@@ -50,6 +56,10 @@ func (p Precision) Format(v float64) string {
 		return shortest(v, 1e9)
 	case Message:
 		return shortest(roundDigits(v, 4), 1e15)
+	case Brief:
+		return strconv.FormatFloat(v, 'g', 4, 64)
+	case Rough:
+		return strconv.FormatFloat(v, 'g', 3, 64)
 	case Report:
 		return strconv.FormatFloat(v, 'g', 6, 64)
 	case Panel:

@@ -5,6 +5,7 @@ import (
 	"strconv"
 
 	"raytable/optics"
+	"raytable/optics/numfmt"
 )
 
 // LaserCaution is the text of the cautions box on the printed plan.
@@ -159,20 +160,7 @@ func postLines(ps []optics.Placement, chars int) []string {
 }
 
 // signed formats a length with an explicit sign, to 0.1 mm.
-func signed(v float64) string {
-	if !finite(v) {
-		return "?"
-	}
-	v = math.Round(v*10) / 10
-	if v == 0 {
-		return "0"
-	}
-	s := strconv.FormatFloat(v, 'f', -1, 64)
-	if v > 0 {
-		s = "+" + s
-	}
-	return s
-}
+func signed(v float64) string { return numfmt.Signed(numfmt.Tenth, v) }
 
 // drawCautions draws the laser cautions in a box.
 func drawCautions(p *pen, x, y, w, h float64, lines []string) {
