@@ -72,12 +72,19 @@ func traceRays(b *optics.Bench, p *optics.Path, places []optics.ElementPlace) ([
 	for _, k := range stopOrder {
 		e := &b.Elements[k.element]
 		warnings = append(warnings, optics.Warning{
-			Code:    "rays-" + k.status,
+			Code:    stopCodes[k.status],
 			Element: e.ID,
 			Message: stopMessage(e, k.status, stopped[k], len(specs)),
 		})
 	}
 	return rays, warnings
+}
+
+// stopCodes is the warning given for rays that end early with each status.
+var stopCodes = map[string]optics.WarningCode{
+	optics.RayClipped: optics.WarnRaysClipped,
+	optics.RayTIR:     optics.WarnRaysTIR,
+	optics.RayMissed:  optics.WarnRaysMissed,
 }
 
 func stopMessage(e *optics.Element, status string, n, total int) string {

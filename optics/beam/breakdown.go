@@ -11,7 +11,7 @@ import (
 
 // CodeNotParaxial is the warning given instead of beam numbers when the beam leaves the paraxial
 // regime.
-const CodeNotParaxial = "beam-not-paraxial"
+const CodeNotParaxial = optics.WarnBeamNotParaxial
 
 // ParaxialLimitRad is the far-field half-angle beyond which the Gaussian beam, a paraxial solution
 // of the wave equation, no longer describes the light even roughly (common practice: it is good
