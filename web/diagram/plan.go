@@ -9,10 +9,7 @@ import (
 )
 
 // LaserCaution is the text of the cautions box on the printed plan.
-const LaserCaution = "Laser radiation can injure eyes and skin. Keep beams horizontal and below eye level, " +
-	"terminate every beam, watch reflections from mounts, tools and jewellery, wear eyewear rated for the " +
-	"wavelength and power. These numbers are paraxial and Gaussian estimates, not a safety assessment: " +
-	"follow IEC 60825-1 / ANSI Z136.1, local rules and your laser safety officer."
+const LaserCaution = optics.CautionParagraph
 
 // CheckBarLabel is printed above the plan's 100 mm check bar.
 const CheckBarLabel = "print at 100 %: this bar must measure 100 mm"
