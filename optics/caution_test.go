@@ -1,7 +1,6 @@
 package optics
 
 import (
-	"os"
 	"strings"
 	"testing"
 )
@@ -21,11 +20,7 @@ func TestCautionWordingsAgree(t *testing.T) {
 
 // The README's 'Laser safety' section is the caution paragraph, word for word.
 func TestReadmeCaution(t *testing.T) {
-	data, err := os.ReadFile("../README.md")
-	if err != nil {
-		t.Fatal(err)
-	}
-	readme := string(data)
+	readme := readReadme(t)
 	start := strings.Index(readme, "## Laser safety\n")
 	if start < 0 {
 		t.Fatal("README has no 'Laser safety' section")

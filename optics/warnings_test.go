@@ -19,11 +19,7 @@ func warningTable() string {
 // TestReadmeListsEveryWarningCode keeps the README's table of codes ('Report, format
 // raytable/report/v1') equal to WarningCodes.
 func TestReadmeListsEveryWarningCode(t *testing.T) {
-	data, err := os.ReadFile("../README.md")
-	if err != nil {
-		t.Fatal(err)
-	}
-	readme := string(data)
+	readme := readReadme(t)
 	start := strings.Index(readme, "| warning code | meaning |")
 	if start < 0 {
 		t.Fatalf("README has no table of warning codes; it should read:\n%s", warningTable())
@@ -35,6 +31,16 @@ func TestReadmeListsEveryWarningCode(t *testing.T) {
 	if got, want := readme[start:start+end+1], warningTable(); got != want {
 		t.Errorf("README's table of warning codes differs from optics.WarningCodes; it should read:\n%s", want)
 	}
+}
+
+// readReadme is the repository's README.md.
+func readReadme(t *testing.T) string {
+	t.Helper()
+	data, err := os.ReadFile("../README.md")
+	if err != nil {
+		t.Fatal(err)
+	}
+	return string(data)
 }
 
 // TestWarningCodesAreUnique: each code has one entry with a meaning, and Meaning finds it.

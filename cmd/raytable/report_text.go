@@ -34,12 +34,7 @@ func writeText(w io.Writer, r *optics.Report) error {
 // then goes into that column's cells), or on a line of its own; the rows indented by two spaces;
 // a row's note in parentheses after it; the section's note under the rows, or alone in their place.
 func writeSection(w io.Writer, s *tables.Section) {
-	var cols []int
-	for i, c := range s.Columns {
-		if c.In.Has(tables.Text) {
-			cols = append(cols, i)
-		}
-	}
+	cols := s.ColumnsIn(tables.Text)
 	var heads []string
 	if s.Transposed {
 		heads = append(heads, s.LabelHead.In(tables.Text))
@@ -65,11 +60,8 @@ func writeSection(w io.Writer, s *tables.Section) {
 	if len(heads) > 0 {
 		fmt.Fprintf(w, "%s\n", strings.Join(heads, "\t"))
 	}
-	rows := 0
-	for _, row := range s.Rows {
-		if !row.In.Has(tables.Text) {
-			continue
-		}
+	rows := s.RowsIn(tables.Text)
+	for _, row := range rows {
 		var cells []string
 		if s.Transposed {
 			cells = append(cells, row.QuantityLabel(tables.Text))
@@ -88,10 +80,9 @@ func writeSection(w io.Writer, s *tables.Section) {
 			cells[len(cells)-1] += " (" + row.Note + ")"
 		}
 		fmt.Fprintf(w, "  %s\n", strings.Join(cells, "\t"))
-		rows++
 	}
 	if note := s.Note.In(tables.Text); note != "" {
-		if rows > 0 {
+		if len(rows) > 0 {
 			note = "  " + note
 		}
 		fmt.Fprintf(w, "%s\n", note)

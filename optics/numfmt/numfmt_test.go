@@ -31,23 +31,10 @@ func TestFormat(t *testing.T) {
 		{Hundredth, 137.5, "137.50"}, {Hundredth, -0.001, "0.00"}, {Hundredth, -1.005, "-1.00"},
 		{TenThousandth, 0.99848, "0.9985"}, {TenThousandth, 1, "1.0000"},
 		{Index, 1.4570183, "1.457018"},
-	} {
-		if got := tc.p.Format(tc.in); got != tc.want {
-			t.Errorf("precision %d of %v = %q, want %q", tc.p, tc.in, got, tc.want)
-		}
-	}
-}
-
-// The drawings round halves away from zero; strconv, and so Panel, rounds the exact decimal
-// value to even. Both rules are kept because each output has always used its own.
-func TestHalves(t *testing.T) {
-	for _, tc := range []struct {
-		p    Precision
-		in   float64
-		want string
-	}{
-		{Label3, 608.5, "609"}, {Label3, 604.5, "605"}, {Label3, -608.5, "-609"},
-		{Message, 608.5, "608.5"}, {Panel, 608.55, "608.55"}, {Panel, 60850.5, "60850"}, {Panel, 60851.5, "60852"},
+		// The drawings round halves away from zero; strconv, and so Panel and Message, rounds the
+		// exact decimal value to even. Each output keeps the rule it has always used.
+		{Label3, 604.5, "605"}, {Label3, -608.5, "-609"}, {Message, 608.5, "608.5"},
+		{Panel, 60850.5, "60850"}, {Panel, 60851.5, "60852"},
 	} {
 		if got := tc.p.Format(tc.in); got != tc.want {
 			t.Errorf("precision %d of %v = %q, want %q", tc.p, tc.in, got, tc.want)

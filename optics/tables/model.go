@@ -93,6 +93,28 @@ type Row struct {
 	In   Layout
 }
 
+// ColumnsIn lists the indexes of the columns layout l shows.
+func (s *Section) ColumnsIn(l Layout) []int {
+	var out []int
+	for i, c := range s.Columns {
+		if c.In.Has(l) {
+			out = append(out, i)
+		}
+	}
+	return out
+}
+
+// RowsIn lists the rows layout l shows.
+func (s *Section) RowsIn(l Layout) []*Row {
+	var out []*Row
+	for i := range s.Rows {
+		if s.Rows[i].In.Has(l) {
+			out = append(out, &s.Rows[i])
+		}
+	}
+	return out
+}
+
 // QuantityLabel names a transposed section's row in layout l.
 func (r Row) QuantityLabel(l Layout) string { return quantityLabel(r.Label, r.Unit, r.From, l) }
 

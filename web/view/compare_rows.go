@@ -29,18 +29,7 @@ func reportItems(r *optics.Report) []item {
 		out = append(out, it)
 	}
 	for _, s := range tables.Build(r).In(tables.Compare) {
-		var cols []int
-		for i, c := range s.Columns {
-			if c.In.Has(tables.Compare) {
-				cols = append(cols, i)
-			}
-		}
-		var rows []*tables.Row
-		for i := range s.Rows {
-			if s.Rows[i].In.Has(tables.Compare) {
-				rows = append(rows, &s.Rows[i])
-			}
-		}
+		cols, rows := s.ColumnsIn(tables.Compare), s.RowsIn(tables.Compare)
 		if s.Transposed {
 			for _, i := range cols {
 				for _, row := range rows {

@@ -31,22 +31,14 @@ func warningText(w optics.Warning) string {
 // cells by the page's profile.
 func pageTable(s *tables.Section) Table {
 	t := Table{Title: s.Title.In(tables.Page), TestID: string(s.Name), Note: s.Note.In(tables.Page)}
-	var cols []int
-	for i, c := range s.Columns {
-		if c.In.Has(tables.Page) {
-			cols = append(cols, i)
-		}
-	}
+	cols := s.ColumnsIn(tables.Page)
 	if s.Transposed {
 		t.Head = append(t.Head, s.LabelHead.In(tables.Page))
 	}
 	for _, i := range cols {
 		t.Head = append(t.Head, s.Columns[i].Label(tables.Page))
 	}
-	for _, row := range s.Rows {
-		if !row.In.Has(tables.Page) {
-			continue
-		}
+	for _, row := range s.RowsIn(tables.Page) {
 		var cells []string
 		if s.Transposed {
 			cells = append(cells, row.QuantityLabel(tables.Page))
