@@ -160,9 +160,9 @@ type ExactPoint struct {
 
 // Warning is something a builder should look at; it does not stop the computation.
 type Warning struct {
-	Code    string `json:"code"`
-	Element string `json:"element"`
-	Message string `json:"message"`
+	Code    WarningCode `json:"code"`
+	Element string      `json:"element"`
+	Message string      `json:"message"`
 	// Others names further elements the warning is about, e.g. the second of two overlapping
 	// mounts, so that drawings can mark them without reading the message.
 	Others []string `json:"others,omitempty"`

@@ -2,8 +2,8 @@ package optics
 
 import (
 	"math"
+	"raytable/optics/numfmt"
 	"slices"
-	"strconv"
 	"strings"
 	"unicode"
 	"unicode/utf8"
@@ -240,21 +240,10 @@ func (v *checker) stray(path string, present map[string]bool, allowed []string, 
 
 // fmtNum formats a number compactly: plain decimals without trailing zeros, exponent form only for
 // very large or very small magnitudes.
-func fmtNum(x float64) string {
-	if a := math.Abs(x); a == 0 || (a >= 1e-4 && a < 1e15) {
-		return strconv.FormatFloat(x, 'f', -1, 64)
-	}
-	return strconv.FormatFloat(x, 'g', -1, 64)
-}
+func fmtNum(x float64) string { return numfmt.Exact.Format(x) }
 
 // fmtRound formats a computed value to 4 significant digits, for messages.
-func fmtRound(x float64) string {
-	r, err := strconv.ParseFloat(strconv.FormatFloat(x, 'g', 4, 64), 64)
-	if err != nil {
-		return fmtNum(x)
-	}
-	return fmtNum(r)
-}
+func fmtRound(x float64) string { return numfmt.Message.Format(x) }
 
 // plainName reports whether s uses only letters, digits, '-', '_' and '.'.
 func plainName(s string) bool {

@@ -3,6 +3,7 @@ package server
 import (
 	"fmt"
 	"math"
+	"raytable/optics/numfmt"
 	"strconv"
 	"strings"
 )
@@ -90,10 +91,4 @@ func isDigit(c byte) bool { return c >= '0' && c <= '9' }
 
 // formatNumber writes a stored value back into a form field: the shortest text that reads back to
 // the same float64, without exponents for everyday sizes.
-func formatNumber(v float64) string {
-	a := math.Abs(v)
-	if a == 0 || (a >= 1e-4 && a < 1e9) {
-		return strconv.FormatFloat(v, 'f', -1, 64)
-	}
-	return strconv.FormatFloat(v, 'g', -1, 64)
-}
+func formatNumber(v float64) string { return numfmt.Field.Format(v) }

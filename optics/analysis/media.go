@@ -24,7 +24,7 @@ func media(b *optics.Bench, warnings []optics.Warning) ([]optics.MediumIndex, []
 			})
 			if !in {
 				warnings = append(warnings, optics.Warning{
-					Code:    "outside-fit-range",
+					Code:    optics.WarnOutsideFitRange,
 					Element: usedBy(b, name),
 					Message: fmt.Sprintf("%s at %g nm is outside the %g-%g nm range of its index model; the index is extrapolated", name, w, lo, hi),
 				})

@@ -7,6 +7,7 @@ import (
 	"gonum.org/v1/gonum/spatial/r3"
 
 	"raytable/optics"
+	"raytable/optics/numfmt"
 	"raytable/optics/paraxial"
 	"raytable/optics/trace"
 )
@@ -73,12 +74,19 @@ func traceRays(b *optics.Bench, p *optics.Path, places []optics.ElementPlace) ([
 	for _, k := range stopOrder {
 		e := &b.Elements[k.element]
 		warnings = append(warnings, optics.Warning{
-			Code:    "rays-" + k.status,
+			Code:    stopCodes[k.status],
 			Element: e.ID,
 			Message: stopMessage(e, k.status, stopped[k], len(specs)),
 		})
 	}
 	return rays, warnings
+}
+
+// stopCodes is the warning given for rays that end early with each status.
+var stopCodes = map[string]optics.WarningCode{
+	optics.RayClipped: optics.WarnRaysClipped,
+	optics.RayTIR:     optics.WarnRaysTIR,
+	optics.RayMissed:  optics.WarnRaysMissed,
 }
 
 func stopMessage(e *optics.Element, status string, n, total int) string {
@@ -95,4 +103,4 @@ func stopMessage(e *optics.Element, status string, n, total int) string {
 func vec(v r3.Vec) [3]float64 { return [3]float64{v.X, v.Y, v.Z} }
 
 // num formats a length compactly: 25.4, 0.04, 150.
-func num(v float64) string { return fmt.Sprintf("%.4g", v) }
+var num = numfmt.Brief.Format

@@ -32,7 +32,7 @@ func screenWarnings(b *optics.Bench, r *optics.Report) []optics.Warning {
 		}
 		if outside > 0 {
 			out = append(out, optics.Warning{
-				Code:    "screen-overfilled",
+				Code:    optics.WarnScreenOverfilled,
 				Element: b.Elements[i].ID,
 				Message: fmt.Sprintf("%d of %d rays reaching %s land outside its %s mm width (up to %s mm from its centre)", outside, reached, e.ID, num(*e.WidthMM), num(worst)),
 			})

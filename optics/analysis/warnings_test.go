@@ -3,6 +3,8 @@ package analysis
 import (
 	"strings"
 	"testing"
+
+	"raytable/optics"
 )
 
 // TestWarningsFire builds a bench for each warning that analysis raises itself and checks that it
@@ -12,8 +14,10 @@ func TestWarningsFire(t *testing.T) {
  "table":{"grid":"none","width_mm":600,"depth_mm":300,"beam_height_mm":75},
  "source":{"x_mm":0,"y_mm":150,"heading_deg":0,"kind":"collimated","semi_diameter_mm":5},`
 	tests := []struct {
-		name, bench, code, element string
-		inMessage                  []string
+		name, bench string
+		code        optics.WarningCode
+		element     string
+		inMessage   []string
 	}{
 		{
 			// A 10 mm wide bundle on a 4 mm wide screen: rays land up to 5 mm from its centre.
@@ -38,6 +42,9 @@ func TestWarningsFire(t *testing.T) {
 		t.Run(tt.name, func(t *testing.T) {
 			r := mustRun(t, tt.bench)
 			for _, w := range r.Warnings {
+				if w.Code.Meaning() == "" {
+					t.Errorf("warning code %q is not in optics.WarningCodes", w.Code)
+				}
 				if w.Code != tt.code {
 					continue
 				}

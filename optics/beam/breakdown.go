@@ -6,11 +6,12 @@ import (
 	"math/cmplx"
 
 	"raytable/optics"
+	"raytable/optics/numfmt"
 )
 
 // CodeNotParaxial is the warning given instead of beam numbers when the beam leaves the paraxial
 // regime.
-const CodeNotParaxial = "beam-not-paraxial"
+const CodeNotParaxial = optics.WarnBeamNotParaxial
 
 // ParaxialLimitRad is the far-field half-angle beyond which the Gaussian beam, a paraxial solution
 // of the wave equation, no longer describes the light even roughly (common practice: it is good
@@ -57,7 +58,7 @@ func notParaxialWarning(p *optics.Path, surface int, angleRad float64) optics.Wa
 	}
 	angle := "an unbounded angle"
 	if !math.IsInf(angleRad, 0) {
-		angle = fmt.Sprintf("%.3g rad", angleRad)
+		angle = numfmt.Rough.Format(angleRad) + " rad"
 	}
 	return optics.Warning{Code: CodeNotParaxial, Element: id, Message: fmt.Sprintf(
 		"the Gaussian beam diverges with %s %s, beyond the %.1f rad where the paraxial beam model holds; no beam numbers are given: focus less tightly or check focal lengths and M²",

@@ -8,13 +8,13 @@ import (
 	"raytable/optics/paraxial"
 )
 
-// Warning codes of this package.
+// Warning codes of this package (see optics.WarningCodes).
 const (
-	CodeClipped           = "beam-clipped"
-	CodeBeamInvalid       = "beam-invalid"
-	CodeBackReflection    = "back-reflection-focus"
-	CodeFocusInGlass      = "focus-in-glass"
-	CodeFocusNearGlass    = "focus-near-glass"
+	CodeClipped           = optics.WarnBeamClipped
+	CodeBeamInvalid       = optics.WarnBeamInvalid
+	CodeBackReflection    = optics.WarnBackReflectionFocus
+	CodeFocusInGlass      = optics.WarnFocusInGlass
+	CodeFocusNearGlass    = optics.WarnFocusNearGlass
 	backReflectionReachMM = 25.0 // mm: a ghost focus this close to the source or an optic upstream is reported
 	nearGlassMM           = 1.0  // mm: a focus this close to a glass surface is reported
 )

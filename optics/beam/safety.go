@@ -5,6 +5,7 @@ import (
 	"math"
 
 	"raytable/optics"
+	"raytable/optics/numfmt"
 	"raytable/optics/paraxial"
 )
 
@@ -100,7 +101,7 @@ func crossing(x stretch, r paraxial.Ray) (float64, bool) {
 
 // focusHazard says whether a focus at z in stretch x lies inside glass or within 1 mm of a
 // refracting face, with the element concerned and a plain description of where.
-func focusHazard(p *optics.Path, x stretch, z float64) (code, id, where string, hit bool) {
+func focusHazard(p *optics.Path, x stretch, z float64) (code optics.WarningCode, id, where string, hit bool) {
 	if x.Glass() {
 		prev := &p.Surfaces[x.I-1]
 		return CodeFocusInGlass, prev.ID, fmt.Sprintf("inside the glass of %s, %s after its face %d (path %.1f mm)", prev.ID, mm(z-x.Z0), prev.Face, z), true
@@ -216,7 +217,7 @@ func mm(d float64) string {
 	if math.Abs(d) < 0.01 {
 		return "less than 0.01 mm"
 	}
-	return fmt.Sprintf("%.3g mm", d)
+	return numfmt.Rough.Format(d) + " mm"
 }
 
 // warnSet collects warnings, one per code and key (an element, or a face), noting which planes
@@ -227,7 +228,7 @@ type warnSet struct {
 	index  map[[2]string]int
 }
 
-func (w *warnSet) add(code, id, key string, plane paraxial.Plane, msg string) {
+func (w *warnSet) add(code optics.WarningCode, id, key string, plane paraxial.Plane, msg string) {
 	name := "tangential"
 	if plane == paraxial.Sagittal {
 		name = "sagittal"
@@ -235,7 +236,7 @@ func (w *warnSet) add(code, id, key string, plane paraxial.Plane, msg string) {
 	if w.index == nil {
 		w.index = map[[2]string]int{}
 	}
-	k := [2]string{code, key}
+	k := [2]string{string(code), key}
 	if i, ok := w.index[k]; ok {
 		if w.planes[i] != name && w.planes[i] != "tangential and sagittal" {
 			w.planes[i] = "tangential and sagittal"

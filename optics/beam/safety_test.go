@@ -15,7 +15,7 @@ func collimatedBench() *optics.Bench {
 	return &optics.Bench{WavelengthsNM: []float64{hene}, Source: optics.Source{Kind: optics.SourceCollimated}}
 }
 
-func find(ws []optics.Warning, code, element string) (optics.Warning, bool) {
+func find(ws []optics.Warning, code optics.WarningCode, element string) (optics.Warning, bool) {
 	for _, w := range ws {
 		if w.Code == code && w.Element == element {
 			return w, true
@@ -77,7 +77,7 @@ func TestFocusInOrNearGlass(t *testing.T) {
 	cases := []struct {
 		name    string
 		parts   []part
-		code    string // "" = no focus warning
+		code    optics.WarningCode // "" = no focus warning
 		element string
 		text    string
 	}{

@@ -43,7 +43,7 @@ func plane(id, typ string, gap float64) optics.Element {
 }
 
 // withCode returns the warnings of one code.
-func withCode(ws []optics.Warning, code string) []optics.Warning {
+func withCode(ws []optics.Warning, code optics.WarningCode) []optics.Warning {
 	var out []optics.Warning
 	for _, w := range ws {
 		if w.Code == code {

@@ -8,14 +8,13 @@ import (
 	"raytable/optics"
 )
 
-// Warning codes of the layout checks. They are stable: tests, the web page and other programs
-// match on them.
+// Warning codes of the layout checks (see optics.WarningCodes).
 const (
-	CodeMountsOverlap = "mounts-overlap" // two mount footprints overlap
-	CodeMountInBeam   = "mount-in-beam"  // the beam passes through another element's mount
-	CodeOffTable      = "off-table"      // an element or its mount is off the table
-	CodeBeamOffTable  = "beam-off-table" // a stretch of the beam leaves the table
-	CodeNoBeamEnd     = "no-beam-end"    // the path ends without a screen or dump
+	CodeMountsOverlap = optics.WarnMountsOverlap
+	CodeMountInBeam   = optics.WarnMountInBeam
+	CodeOffTable      = optics.WarnOffTable
+	CodeBeamOffTable  = optics.WarnBeamOffTable
+	CodeNoBeamEnd     = optics.WarnNoBeamEnd
 )
 
 // Plan places every element's mount on the breadboard and checks the arrangement. It returns one

@@ -5,6 +5,7 @@ import (
 	"strings"
 
 	"raytable/optics"
+	"raytable/optics/numfmt"
 )
 
 // PlacementHeader is the first row of PlacementRows.
@@ -20,24 +21,17 @@ func PlacementRows(ps []optics.Placement) [][]string {
 	rows := make([][]string, 0, len(ps)+1)
 	rows = append(rows, append([]string(nil), PlacementHeader...))
 	for _, p := range ps {
-		row := []string{inert(p.ID), inert(p.Type), mm(p.TableXMM), mm(p.TableYMM), mm(p.HeadingDeg), "", "", "", ""}
+		row := []string{inert(p.ID), inert(p.Type), hundredth(p.TableXMM), hundredth(p.TableYMM), hundredth(p.HeadingDeg), "", "", "", ""}
 		if p.HoleColumn > 0 && p.HoleRow > 0 {
 			row[5], row[6] = strconv.Itoa(p.HoleColumn), strconv.Itoa(p.HoleRow)
-			row[7], row[8] = mm(p.OffsetXMM), mm(p.OffsetYMM)
+			row[7], row[8] = hundredth(p.OffsetXMM), hundredth(p.OffsetYMM)
 		}
 		rows = append(rows, row)
 	}
 	return rows
 }
 
-// mm formats with two decimals and without a negative zero.
-func mm(v float64) string {
-	s := strconv.FormatFloat(v, 'f', 2, 64)
-	if s == "-0.00" {
-		return "0.00"
-	}
-	return s
-}
+var hundredth = numfmt.Hundredth.Format
 
 // inert defuses a text cell a spreadsheet would evaluate.
 func inert(s string) string {

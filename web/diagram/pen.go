@@ -5,6 +5,7 @@ import (
 	"encoding/xml"
 	"fmt"
 	"math"
+	"raytable/optics/numfmt"
 	"strconv"
 	"strings"
 
@@ -157,21 +158,7 @@ func escapeAttr(s string) string {
 }
 
 // fmtNum formats a number for a label: at most 4 significant digits, no exponent, no trailing zeros.
-func fmtNum(v float64) string {
-	if !finite(v) {
-		return "?"
-	}
-	return strconv.FormatFloat(roundSig(v, 4), 'f', -1, 64)
-}
-
-// roundSig rounds v to n significant digits.
-func roundSig(v float64, n int) float64 {
-	if v == 0 || !finite(v) {
-		return v
-	}
-	e := math.Pow10(n - 1 - int(math.Floor(math.Log10(math.Abs(v)))))
-	return math.Round(v*e) / e
-}
+func fmtNum(v float64) string { return numfmt.Label.Format(v) }
 
 // fmtLength formats a length in mm for a label with 3 significant digits, in µm below 1 mm.
 func fmtLength(mm float64) string {
@@ -179,9 +166,9 @@ func fmtLength(mm float64) string {
 		return "?"
 	}
 	if math.Abs(mm) < 1 && mm != 0 {
-		return strconv.FormatFloat(roundSig(mm*1000, 3), 'f', -1, 64) + " µm"
+		return numfmt.Label3.Format(mm*1000) + " µm"
 	}
-	return strconv.FormatFloat(roundSig(mm, 3), 'f', -1, 64) + " mm"
+	return numfmt.Label3.Format(mm) + " mm"
 }
 
 // niceLength is the largest 1, 2 or 5 times a power of ten not above target (target > 0).

@@ -5,13 +5,11 @@ import (
 	"strconv"
 
 	"raytable/optics"
+	"raytable/optics/numfmt"
 )
 
 // LaserCaution is the text of the cautions box on the printed plan.
-const LaserCaution = "Laser radiation can injure eyes and skin. Keep beams horizontal and below eye level, " +
-	"terminate every beam, watch reflections from mounts, tools and jewellery, wear eyewear rated for the " +
-	"wavelength and power. These numbers are paraxial and Gaussian estimates, not a safety assessment: " +
-	"follow IEC 60825-1 / ANSI Z136.1, local rules and your laser safety officer."
+const LaserCaution = optics.CautionParagraph
 
 // CheckBarLabel is printed above the plan's 100 mm check bar.
 const CheckBarLabel = "print at 100 %: this bar must measure 100 mm"
@@ -154,20 +152,7 @@ func postLines(ps []optics.Placement, chars int) []string {
 }
 
 // signed formats a length with an explicit sign, to 0.1 mm.
-func signed(v float64) string {
-	if !finite(v) {
-		return "?"
-	}
-	v = math.Round(v*10) / 10
-	if v == 0 {
-		return "0"
-	}
-	s := strconv.FormatFloat(v, 'f', -1, 64)
-	if v > 0 {
-		s = "+" + s
-	}
-	return s
-}
+func signed(v float64) string { return numfmt.Signed(numfmt.Tenth, v) }
 
 // drawCautions draws the laser cautions in a box.
 func drawCautions(p *pen, x, y, w, h float64, lines []string) {

@@ -10,8 +10,8 @@ import (
 
 // Warning codes drawn specially on the table: footprints they name get a red outline.
 const (
-	codeMountsOverlap = "mounts-overlap"
-	codeMountInBeam   = "mount-in-beam"
+	codeMountsOverlap = optics.WarnMountsOverlap
+	codeMountInBeam   = optics.WarnMountInBeam
 )
 
 const (
@@ -336,7 +336,7 @@ func (t *tableScene) drawWarningMarkers(p *pen) {
 		x += 1.6*m + float64(k)*2.3*m
 		y -= 1.6 * m
 		p.group()
-		p.title(w.Code + ": " + w.Message)
+		p.title(string(w.Code) + ": " + w.Message)
 		p.circle(x, y, m, `fill="#c62828"`)
 		p.text(x, y+0.36*m*1.1, itoa(i+1), attr("font-size", p.num(1.1*m)), `fill="#ffffff"`, `text-anchor="middle"`, `font-weight="bold"`)
 		p.gend()
@@ -351,7 +351,7 @@ type legendLine struct{ num, text string }
 func warningLines(ws []optics.Warning, width int) []legendLine {
 	var lines []legendLine
 	for i, w := range ws {
-		for k, l := range wrap(w.Code+": "+w.Message, width) {
+		for k, l := range wrap(string(w.Code)+": "+w.Message, width) {
 			n := ""
 			if k == 0 {
 				n = itoa(i+1) + "."

@@ -1,28 +1,12 @@
 package view
 
 import (
-	"math"
 	"strings"
 	"testing"
 
 	"raytable/optics"
+	"raytable/optics/tables"
 )
-
-// Five significant digits and no exponent for everyday sizes: common practice for engineering
-// tables; the expected strings are that rule applied by hand.
-func TestNum(t *testing.T) {
-	for _, tc := range []struct {
-		in   float64
-		want string
-	}{
-		{0, "0"}, {math.Copysign(0, -1), "0"}, {1e-20, "1e-20"}, {130.1749, "130.17"}, {-41.5617, "-41.562"},
-		{0.000349071, "0.00034907"}, {123456.7, "123460"}, {math.NaN(), "—"}, {math.Inf(1), "—"},
-	} {
-		if got := num(tc.in); got != tc.want {
-			t.Errorf("num(%v) = %q, want %q", tc.in, got, tc.want)
-		}
-	}
-}
 
 // The system table shows a sagittal column only when a value differs between the planes.
 func TestSystemTableColumns(t *testing.T) {
@@ -47,6 +31,16 @@ func TestSystemTableColumns(t *testing.T) {
 	if got := tb.Rows[0]; got.Cells[0] != "EFL (mm)" || got.Cells[1] != "100" || got.Cells[2] != "80" || !got.Marked {
 		t.Errorf("first row %+v, want EFL 100 | 80 marked", got)
 	}
+}
+
+// systemTable is the page's system table of r.
+func systemTable(r *optics.Report) Table {
+	for _, s := range tables.Build(r).In(tables.Page) {
+		if s.Name == tables.System {
+			return pageTable(s)
+		}
+	}
+	return Table{}
 }
 
 func TestNumbersPanelOfAnEmptyBench(t *testing.T) {

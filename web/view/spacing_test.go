@@ -11,6 +11,7 @@ import (
 
 	"raytable/optics"
 	"raytable/optics/analysis"
+	"raytable/optics/numfmt"
 )
 
 // textOf is the text inside n, concatenated.
@@ -95,7 +96,7 @@ func TestNumbersPanelShowsSpacing(t *testing.T) {
 	if strings.Join(marked, ",") != "PH,L2" {
 		t.Errorf("marked rows %v, want PH,L2", marked)
 	}
-	if note := textOf(table.Parent); !strings.Contains(note, "depth of focus ± "+num(*r.SpacingBasis.DepthOfFocusMM)+" mm at CAM") {
-		t.Errorf("the spacing note does not give the depth of focus %s mm at CAM", num(*r.SpacingBasis.DepthOfFocusMM))
+	if note := textOf(table.Parent); !strings.Contains(note, "depth of focus ± "+numfmt.Panel.Format(*r.SpacingBasis.DepthOfFocusMM)+" mm at CAM") {
+		t.Errorf("the spacing note does not give the depth of focus %s mm at CAM", numfmt.Panel.Format(*r.SpacingBasis.DepthOfFocusMM))
 	}
 }

@@ -1,0 +1,58 @@
+package optics
+
+// WarningCode names what a Warning is about. Codes are stable: tests, the page, the drawings and
+// other programs match on them, and the README lists them from WarningCodes.
+type WarningCode string
+
+// Every warning code. Add a code here together with its entry in WarningCodes.
+const (
+	WarnRaysClipped         WarningCode = "rays-clipped"
+	WarnRaysTIR             WarningCode = "rays-tir"
+	WarnRaysMissed          WarningCode = "rays-missed"
+	WarnOutsideFitRange     WarningCode = "outside-fit-range"
+	WarnScreenOverfilled    WarningCode = "screen-overfilled"
+	WarnBeamClipped         WarningCode = "beam-clipped"
+	WarnBeamInvalid         WarningCode = "beam-invalid"
+	WarnBackReflectionFocus WarningCode = "back-reflection-focus"
+	WarnFocusInGlass        WarningCode = "focus-in-glass"
+	WarnFocusNearGlass      WarningCode = "focus-near-glass"
+	WarnBeamNotParaxial     WarningCode = "beam-not-paraxial"
+	WarnMountsOverlap       WarningCode = "mounts-overlap"
+	WarnMountInBeam         WarningCode = "mount-in-beam"
+	WarnOffTable            WarningCode = "off-table"
+	WarnBeamOffTable        WarningCode = "beam-off-table"
+	WarnNoBeamEnd           WarningCode = "no-beam-end"
+)
+
+// WarningCodes is every code with what it means, in the order the README lists them.
+var WarningCodes = []struct {
+	Code    WarningCode
+	Meaning string
+}{
+	{WarnRaysClipped, "exact rays are cut by the element's clear aperture"},
+	{WarnRaysTIR, "exact rays are totally reflected inside the element"},
+	{WarnRaysMissed, "exact rays miss a face of the element"},
+	{WarnOutsideFitRange, "a wavelength lies outside the range of a medium's index model; the index is extrapolated"},
+	{WarnScreenOverfilled, "rays land outside the screen's width"},
+	{WarnBeamClipped, "the element passes less than 99 % of the beam's power (common practice); the message gives the diameter that would pass 99 %"},
+	{WarnBeamInvalid, "the source's beam cannot be computed (its waist, M² or waist position, or the wavelength, is out of range, or a surface has no index); no beam numbers"},
+	{WarnBackReflectionFocus, "the reflection off a refracting face comes to a focus within 25 mm of the source or of an element upstream, or inside glass"},
+	{WarnFocusInGlass, "the source's ray bundle comes to a focus inside glass"},
+	{WarnFocusNearGlass, "the source's ray bundle comes to a focus within 1 mm of a glass surface"},
+	{WarnBeamNotParaxial, "the beam diverges beyond 1 rad, where the Gaussian beam no longer holds; no beam numbers past the element"},
+	{WarnMountsOverlap, "two mount footprints overlap; `others` names the second"},
+	{WarnMountInBeam, "the beam (its 1/e² envelope, else the traced rays) crosses another element's mount"},
+	{WarnOffTable, "an element or its mount lies off the table"},
+	{WarnBeamOffTable, "a stretch of the beam leaves the table"},
+	{WarnNoBeamEnd, "the path does not end on a screen or dump"},
+}
+
+// Meaning says what the code means; "" for a code that is not in WarningCodes.
+func (c WarningCode) Meaning() string {
+	for _, w := range WarningCodes {
+		if w.Code == c {
+			return w.Meaning
+		}
+	}
+	return ""
+}
