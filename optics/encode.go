@@ -17,6 +17,7 @@ func Encode(b *Bench) ([]byte, error) {
 	if err := Validate(b); err != nil {
 		return nil, err
 	}
+	encodes.Add(1)
 	c := *b
 	if c.Elements == nil {
 		c.Elements = []Element{}

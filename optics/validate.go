@@ -39,6 +39,7 @@ type checker struct {
 }
 
 func validationProblems(b *Bench) []Problem {
+	validations.Add(1)
 	if b == nil {
 		return []Problem{{Message: "no bench given"}}
 	}
