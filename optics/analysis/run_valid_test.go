@@ -1,0 +1,34 @@
+package analysis
+
+import (
+	"os"
+	"reflect"
+	"testing"
+
+	"raytable/optics"
+)
+
+// TestRunValidIsRunWithoutTheCheck: for a bench Decode accepted, RunValid gives the very report Run
+// gives, and checks the rules no further time.
+func TestRunValidIsRunWithoutTheCheck(t *testing.T) {
+	data, err := os.ReadFile("../../testdata/demo-bench.json")
+	if err != nil {
+		t.Fatal(err)
+	}
+	b, err := optics.Decode(data)
+	if err != nil {
+		t.Fatal(err)
+	}
+	want, err := Run(b)
+	if err != nil {
+		t.Fatal(err)
+	}
+	before := optics.Validations()
+	got := RunValid(b)
+	if n := optics.Validations() - before; n != 0 {
+		t.Errorf("RunValid checked the rules %d times, want 0", n)
+	}
+	if !reflect.DeepEqual(got, want) {
+		t.Error("RunValid and Run give different reports for the demo bench")
+	}
+}
