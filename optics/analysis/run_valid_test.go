@@ -1,7 +1,6 @@
 package analysis
 
 import (
-	"os"
 	"reflect"
 	"testing"
 
@@ -11,14 +10,7 @@ import (
 // TestRunValidIsRunWithoutTheCheck: for a bench Decode accepted, RunValid gives the very report Run
 // gives, and checks the rules no further time.
 func TestRunValidIsRunWithoutTheCheck(t *testing.T) {
-	data, err := os.ReadFile("../../testdata/demo-bench.json")
-	if err != nil {
-		t.Fatal(err)
-	}
-	b, err := optics.Decode(data)
-	if err != nil {
-		t.Fatal(err)
-	}
+	b := loadDemo(t)
 	want, err := Run(b)
 	if err != nil {
 		t.Fatal(err)
