@@ -11,15 +11,16 @@ import (
 )
 
 // Medium resolves a material name as a bench references it: a user-defined material of the bench,
-// a built-in medium, or a glass code "code:NNNMMM". The error is an EInvalid *Error whose message
-// names the rule that failed; the caller adds the JSON path.
+// a built-in medium, or a glass code "code:NNNMMM". The error is an EInvalid *Error; the problems
+// of a user material are under its path in materials, those of any other name at the empty path,
+// since only the caller knows where the name was used.
 func (b *Bench) Medium(name string) (material.Medium, error) {
 	if spec, ok := b.Materials[name]; ok {
 		return spec.Medium(materialPath(name))
 	}
 	m, err := material.Lookup(name)
 	if err != nil {
-		return nil, &Error{Code: EInvalid, Message: err.Error()}
+		return nil, Invalid(materialProblems("", err))
 	}
 	return m, nil
 }

@@ -45,14 +45,14 @@ func (v *checker) lensMaterial(path, name string, checked map[string]bool) {
 		v.add(path, "must name a material")
 		return
 	}
-	m, user := v.userMedia[name]
+	m, user := v.userMedia[name] // built once, by materials
 	if _, defined := v.b.Materials[name]; defined && !user {
 		return // it has problems of its own
 	}
 	if !user {
 		var err error
-		if m, err = v.b.Medium(name); err != nil {
-			v.add(path, "%s", err.Error())
+		if m, err = material.Lookup(name); err != nil {
+			v.problems = append(v.problems, materialProblems(path, err)...)
 			return
 		}
 	}
