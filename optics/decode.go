@@ -43,6 +43,7 @@ var (
 // x_angle_deg, and in elements diameter_mm, a mirror's radius_mm, a screen's width_mm and mount.
 // Input above MaxBenchBytes gives an *Error with code ETooLarge.
 func Decode(data []byte) (*Bench, error) {
+	decodes.Add(1)
 	if len(data) > MaxBenchBytes {
 		return nil, Errorf(ETooLarge, "the bench file is %d bytes; at most %d bytes (1 MiB) are accepted", len(data), MaxBenchBytes)
 	}

@@ -7,6 +7,8 @@ import (
 	"strings"
 	"unicode"
 	"unicode/utf8"
+
+	"raytable/optics/material"
 )
 
 // Limits that Validate enforces.
@@ -20,7 +22,6 @@ const (
 	MaxTitleLength  = 200     // longest title, in characters
 	MaxNotesLength  = 4000    // longest notes, in characters
 	MaxM2           = 10000   // largest beam quality factor; past it the embedded-Gaussian model says nothing useful
-	MaxIndex        = 5.0     // largest accepted refractive index (index or nd)
 	MaxHeadingDeg   = 360.0   // largest accepted |source heading|
 )
 
@@ -34,15 +35,16 @@ func Validate(b *Bench) error {
 // checker collects problems for Validate.
 type checker struct {
 	reader
-	b            *Bench
-	badMaterials map[string]bool // user materials that have problems of their own
+	b         *Bench
+	userMedia map[string]material.Medium // user materials without problems, built once
 }
 
 func validationProblems(b *Bench) []Problem {
+	validations.Add(1)
 	if b == nil {
 		return []Problem{{Message: "no bench given"}}
 	}
-	v := &checker{b: b, badMaterials: map[string]bool{}}
+	v := &checker{b: b, userMedia: map[string]material.Medium{}}
 	if b.Format != FormatBenchV1 {
 		v.add("format", "must be %q, got %q", FormatBenchV1, b.Format)
 	}

@@ -8,11 +8,12 @@ import (
 )
 
 // defaultCacheEntries is how many revisions keep their computed results when Config does not say.
-// One entry holds a report, its JSON and a few drawings: for the demo bench about 1-2 MB.
+// One entry holds a bench, its report, the report's JSON and a few drawings: for the demo bench
+// about 1-2 MB.
 const defaultCacheEntries = 64
 
-// revCache keeps what was computed for stored revisions: the report, its JSON, the drawings and
-// the laid-out results. A revision never changes, so nothing in it goes stale and there is no
+// revCache keeps what was computed for stored revisions: the decoded bench, the report, its JSON,
+// the drawings and the laid-out results. A revision never changes, so nothing in it goes stale and there is no
 // expiry; the cache is bounded by the number of revisions and forgets the least recently used one
 // first. Only stored revisions go in: a preview or a form with errors is not a revision and is
 // computed every time.
@@ -42,6 +43,7 @@ type artifact struct {
 }
 
 const (
+	artBench      = "bench"       // *optics.Bench, read-only once kept
 	artReport     = "report"      // *optics.Report
 	artReportJSON = "report.json" // []byte
 	artResult     = "result"      // view.Result, by opts

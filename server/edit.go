@@ -61,12 +61,10 @@ func summarize(parent, b *optics.Bench, start string) string {
 
 func utf8Start(c byte) bool { return c&0xC0 != 0x80 }
 
-// storeBench saves a valid bench as a new revision and returns it.
-func (s *Server) storeBench(b *optics.Bench, parent *design, start string) (store.Revision, error) {
-	data, err := optics.Encode(b)
-	if err != nil {
-		return store.Revision{}, err
-	}
+// storeBench saves a bench as a new revision and returns it. b has passed Validate and data is
+// its one encoding (optics.EncodeValid); the store keeps those bytes as they are, and loadID
+// relies on this being the only way a revision is written.
+func (s *Server) storeBench(b *optics.Bench, data []byte, parent *design, start string) (store.Revision, error) {
 	id, err := store.NewID(s.random)
 	if err != nil {
 		return store.Revision{}, err
@@ -93,7 +91,8 @@ func problemsOf(err error) ([]optics.Problem, bool) {
 	return ps, true
 }
 
-// readEdit parses the posted form into a bench; problems are what the user must fix.
+// readEdit parses the posted form into a bench and checks the rules on it, each once; problems are
+// what the user must fix.
 func readEdit(vals url.Values) (*optics.Bench, []optics.Problem, error) {
 	b, problems := parseBenchForm(vals)
 	if len(problems) > 0 {
@@ -134,32 +133,52 @@ func (s *Server) edit(w http.ResponseWriter, r *http.Request) {
 		s.invalidEdit(w, r, d, b, values, problems)
 		return
 	}
-	if ps := applyAction(b, vals.Get("action"), vals.Get("add.type"), vals.Get("add.at")); len(ps) > 0 {
+	action := vals.Get("action")
+	if ps := applyAction(b, action, vals.Get("add.type"), vals.Get("add.at")); len(ps) > 0 {
 		values := benchValues(b)
 		overlay(values, vals)
 		s.invalidEdit(w, r, d, b, values, ps)
 		return
 	}
-	if err := optics.Validate(b); err != nil {
-		ps, ok := problemsOf(err)
-		if !ok {
-			s.fail(w, r, err)
+	// Save and apply store the bench checked above. An action that adds, deletes or moves an
+	// element or ray made another bench (an element added to a full bench breaks the element
+	// limit), so its result is checked as well; the posted fields had to pass first, as they must
+	// whatever the button.
+	if changesList(action) {
+		if err := optics.Validate(b); err != nil {
+			ps, ok := problemsOf(err)
+			if !ok {
+				s.fail(w, r, err)
+				return
+			}
+			// The action changed the list, so the posted names no longer line up: show the bench itself.
+			s.invalidEdit(w, r, d, b, benchValues(b), ps)
 			return
 		}
-		// The action changed the list, so the posted names no longer line up: show the bench itself.
-		s.invalidEdit(w, r, d, b, benchValues(b), ps)
+	}
+	data, err := optics.EncodeValid(b)
+	if err != nil {
+		s.fail(w, r, err)
 		return
 	}
-	if data, err := optics.Encode(b); err == nil && bytes.Equal(data, d.rev.Bench) {
+	if bytes.Equal(data, d.rev.Bench) {
 		http.Redirect(w, r, "/r/"+d.rev.ID, http.StatusSeeOther) // nothing changed: no new revision
 		return
 	}
-	rev, err := s.storeBench(b, &d, "")
+	rev, err := s.storeBench(b, data, &d, "")
 	if err != nil {
 		s.fail(w, r, err)
 		return
 	}
 	http.Redirect(w, r, "/r/"+rev.ID, http.StatusSeeOther)
+}
+
+// changesList reports whether the edit form's action changes the element or ray list (add,
+// delete, up, down, add-ray, delete-ray) rather than storing the posted fields as they are ("",
+// save, apply). applyAction has refused any other action before this is asked.
+func changesList(action string) bool {
+	verb, _, _ := strings.Cut(action, ":")
+	return verb != "" && verb != "save" && verb != "apply"
 }
 
 // invalidEdit re-renders the bench page with the user's form and its problems (422). The diagrams

@@ -1,8 +1,6 @@
 package server
 
 import (
-	"bytes"
-	"encoding/json"
 	"fmt"
 	"net/url"
 	"strconv"
@@ -225,19 +223,19 @@ func (f *formReader) zeroNum(path string, q quantity) float64 {
 	return f.num(path, q)
 }
 
-// materials reads the user media, written as the JSON object of the bench file.
+// materials reads the user media, written as the JSON object of the bench file, with the bench
+// file's own reader: the same keys and types are allowed and problems name the same paths.
 func (f *formReader) materials() map[string]optics.MaterialSpec {
 	s := f.text("materials")
 	if s == "" || s == "{}" {
 		return nil
 	}
-	dec := json.NewDecoder(bytes.NewReader([]byte(s)))
-	dec.DisallowUnknownFields()
-	var m map[string]optics.MaterialSpec
-	if err := dec.Decode(&m); err != nil {
+	m, problems, err := optics.DecodeMaterials([]byte(s))
+	if err != nil {
 		f.add("materials", "is not a materials object: %v; write it as in the bench file, e.g. {\"oil\": {\"index\": 1.515}}", err)
 		return nil
 	}
+	f.problems = append(f.problems, problems...)
 	return m
 }
 

@@ -9,6 +9,7 @@ import (
 
 	"raytable/optics"
 	"raytable/server/demo"
+	"raytable/server/store"
 	"raytable/web/view"
 )
 
@@ -46,7 +47,7 @@ func (s *Server) importBench(w http.ResponseWriter, r *http.Request) {
 		s.renderHome(w, r, status, p)
 		return
 	}
-	rev, err := s.storeBench(b, nil, "imported")
+	rev, err := s.storeValid(b, "imported")
 	if err != nil {
 		s.fail(w, r, err)
 		return
@@ -121,10 +122,20 @@ func (s *Server) demo(w http.ResponseWriter, r *http.Request) {
 		s.fail(w, r, optics.Errorf(optics.EInternal, "the embedded demo bench does not decode: %v", err))
 		return
 	}
-	rev, err := s.storeBench(b, nil, "started from the demo")
+	rev, err := s.storeValid(b, "started from the demo")
 	if err != nil {
 		s.fail(w, r, err)
 		return
 	}
 	http.Redirect(w, r, "/r/"+rev.ID, http.StatusSeeOther)
+}
+
+// storeValid stores a bench that Decode has just read and checked as a new revision without a
+// parent: the bench is encoded once, canonically, and not checked again.
+func (s *Server) storeValid(b *optics.Bench, start string) (store.Revision, error) {
+	data, err := optics.EncodeValid(b)
+	if err != nil {
+		return store.Revision{}, err
+	}
+	return s.storeBench(b, data, nil, start)
 }

@@ -39,7 +39,9 @@ type Config struct {
 	// CacheEntries is how many stored revisions keep their computed report, drawings and numbers
 	// (least recently used forgotten first). 0 means the default, 64; a negative value keeps none.
 	CacheEntries int
-	// Analyze computes a bench's report; default analysis.Run. Tests count calls through it.
+	// Analyze computes the report of a bench that has passed Validate; default analysis.RunValid,
+	// as the server computes no other (a stored revision passed before it was saved, a preview
+	// just before). Tests count calls through it.
 	Analyze func(*optics.Bench) (*optics.Report, error)
 }
 
@@ -65,7 +67,7 @@ func New(cfg Config) *Server {
 		s.now = time.Now
 	}
 	if s.analyze == nil {
-		s.analyze = analysis.Run
+		s.analyze = func(b *optics.Bench) (*optics.Report, error) { return analysis.RunValid(b), nil }
 	}
 	entries := cfg.CacheEntries
 	if entries == 0 {

@@ -14,6 +14,13 @@ func Run(b *optics.Bench) (*optics.Report, error) {
 	if err := optics.Validate(b); err != nil {
 		return nil, err
 	}
+	return RunValid(b), nil
+}
+
+// RunValid computes the report of a bench that Validate (or Decode) has already accepted, without
+// checking the rules a second time. Anything else must go through Run: the computations assume
+// every rule holds.
+func RunValid(b *optics.Bench) *optics.Report {
 	p := optics.BuildPath(b)
 	r := &optics.Report{
 		Format:        optics.FormatReportV1,
@@ -49,7 +56,7 @@ func Run(b *optics.Bench) (*optics.Report, error) {
 	r.Warnings = append(r.Warnings, planWarnings...)
 	r.Warnings = append(r.Warnings, screenWarnings(b, r)...)
 	r.Blur = blurs(b, r)
-	return r, nil
+	return r
 }
 
 // systemValues combines the two planes and says where the optical part starts and ends.

@@ -124,11 +124,21 @@ func TestNewConstant(t *testing.T) {
 	if err != nil || c.Index(633) != 1.5 || c.Describe() != "constant index n = 1.5" {
 		t.Errorf("NewConstant(1.5) = %#v, %v", c, err)
 	}
-	for _, n := range []float64{0.99, -1, math.NaN(), math.Inf(1)} {
+	for _, n := range []float64{0.99, -1, MaxIndex + 0.01, 7, math.NaN(), math.Inf(1)} {
 		_, err := NewConstant(n)
 		var ie InputError
 		if !errors.As(err, &ie) || ie[0].Field != "index" {
 			t.Errorf("NewConstant(%v) error = %v, want a problem at \"index\"", n, err)
 		}
+	}
+	// Both ends of [1, MaxIndex] are accepted; the rule names the range (the wording the bench
+	// page has always shown).
+	for _, n := range []float64{1, MaxIndex} {
+		if _, err := NewConstant(n); err != nil {
+			t.Errorf("NewConstant(%v): %v", n, err)
+		}
+	}
+	if _, err := NewConstant(7); err == nil || err.Error() != "index: index 7 must lie between 1 and 5 (indices are relative to air)" {
+		t.Errorf("NewConstant(7) error %q", err)
 	}
 }

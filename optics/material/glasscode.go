@@ -44,13 +44,13 @@ const codePrefix = "code:"
 func NewGlassCode(nd, vd float64) (GlassCode, error) {
 	var problems InputError
 	switch {
-	case math.IsNaN(nd) || math.IsInf(nd, 0):
+	case !finite(nd):
 		problems = append(problems, FieldError{"nd", fmt.Sprintf("must be a finite number, got %v", nd)})
 	case nd <= minND || nd > maxND:
 		problems = append(problems, FieldError{"nd", fmt.Sprintf("must be above %g and at most %g, got %v", minND, maxND, nd)})
 	}
 	switch {
-	case math.IsNaN(vd) || math.IsInf(vd, 0):
+	case !finite(vd):
 		problems = append(problems, FieldError{"vd", fmt.Sprintf("must be a finite number, got %v", vd)})
 	case vd < minVD || vd > maxVD:
 		problems = append(problems, FieldError{"vd", fmt.Sprintf("must be between %g and %g, got %v", minVD, maxVD, vd)})

@@ -54,16 +54,23 @@ type Constant struct {
 	Note string
 }
 
-// NewConstant validates a constant index: finite and at least 1 (relative to air).
+// MaxIndex is the largest constant index NewConstant accepts. Transparent media stay well below it
+// (germanium, among the highest in the infrared, is about 4, from memory); more is a slip.
+const MaxIndex = 5.0
+
+// NewConstant validates a constant index (field name "index"): finite and within [1, MaxIndex],
+// relative to air.
 func NewConstant(n float64) (Constant, error) {
-	if math.IsNaN(n) || math.IsInf(n, 0) {
+	if !finite(n) {
 		return Constant{}, InputError{{Field: "index", Rule: fmt.Sprintf("must be a finite number, got %v", n)}}
 	}
-	if n < 1 {
-		return Constant{}, InputError{{Field: "index", Rule: fmt.Sprintf("must be at least 1 (indices are relative to air), got %v", n)}}
+	if n < 1 || n > MaxIndex {
+		return Constant{}, InputError{{Field: "index", Rule: fmt.Sprintf("index %v must lie between 1 and %v (indices are relative to air)", n, MaxIndex)}}
 	}
 	return Constant{N: n}, nil
 }
+
+func finite(x float64) bool { return !math.IsNaN(x) && !math.IsInf(x, 0) }
 
 // Index returns N for any positive wavelength and NaN for an invalid one.
 func (c Constant) Index(wavelengthNM float64) float64 {

@@ -135,10 +135,13 @@ func TestNewSellmeierRejects(t *testing.T) {
 		{"NaN B", []float64{nan}, []float64{0.01}, 200, 800, "sellmeier.b[0]", "finite"},
 		{"infinite C", []float64{1}, []float64{inf}, 200, 800, "sellmeier.c_um2[0]", "finite"},
 		{"negative C", []float64{1}, []float64{-0.01}, 200, 800, "sellmeier.c_um2[0]", "at least 0"},
-		{"lo above hi", []float64{1}, []float64{0.01}, 800, 200, "range_nm", "must be below"},
+		{"lo above hi", []float64{1}, []float64{0.01}, 800, 200, "range_nm", "low end 800 nm must be below the high end 200 nm"},
 		{"lo equals hi", []float64{1}, []float64{0.01}, 500, 500, "range_nm", "must be below"},
 		{"negative lo", []float64{1}, []float64{0.01}, -1, 800, "range_nm[0]", "at least 0"},
-		{"NaN hi", []float64{1}, []float64{0.01}, 200, nan, "range_nm[1]", "number"},
+		{"NaN hi", []float64{1}, []float64{0.01}, 200, nan, "range_nm[1]", "must be a finite number, got NaN"},
+		{"NaN lo", []float64{1}, []float64{0.01}, nan, 800, "range_nm[0]", "must be a finite number, got NaN"},
+		// Only (0, +Inf) means no range; a stated range ends somewhere.
+		{"open-ended stated range", []float64{1}, []float64{0.01}, 400, inf, "range_nm[1]", "must be a finite number, got +Inf"},
 		{"resonance in range", []float64{1}, []float64{0.25}, 200, 800, "sellmeier.c_um2[0]", "resonance at 500 nm"},
 	}
 	for _, tc := range tests {

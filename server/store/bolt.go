@@ -2,7 +2,6 @@ package store
 
 import (
 	"encoding/binary"
-	"encoding/json"
 	"errors"
 	"fmt"
 	"time"
@@ -13,8 +12,8 @@ import (
 	"raytable/optics"
 )
 
-// Bucket names. revisions maps id -> revision JSON; by_time maps (created nanoseconds, id) -> id so
-// that Recent can walk newest first without reading every revision.
+// Bucket names. revisions maps id -> revision record (record.go); by_time maps (created
+// nanoseconds, id) -> id so that Recent can walk newest first without reading every revision.
 var (
 	bucketRevisions = []byte("revisions")
 	bucketByTime    = []byte("by_time")
@@ -62,9 +61,9 @@ func (s *Bolt) Put(rev Revision) error {
 	if err := checkPut(rev); err != nil {
 		return err
 	}
-	data, err := json.Marshal(rev)
+	data, err := writeRecord(rev)
 	if err != nil {
-		return fmt.Errorf("encode revision %s: %w", rev.ID, err)
+		return err
 	}
 	return s.db.Update(func(tx *bolt.Tx) error {
 		revs := tx.Bucket(bucketRevisions)
@@ -86,7 +85,8 @@ func (s *Bolt) Get(id string) (Revision, error) {
 		if data == nil {
 			return notFound(id)
 		}
-		if err := json.Unmarshal(data, &rev); err != nil {
+		var err error
+		if rev, err = readRecord(data); err != nil {
 			return optics.Errorf(optics.EInternal, "stored revision %s is unreadable: %v", id, err)
 		}
 		return nil
@@ -101,8 +101,8 @@ func (s *Bolt) Recent(n int) ([]Revision, error) {
 		revs := tx.Bucket(bucketRevisions)
 		c := tx.Bucket(bucketByTime).Cursor()
 		for k, id := c.Last(); k != nil && (n < 0 || len(out) < n); k, id = c.Prev() {
-			var rev Revision
-			if err := json.Unmarshal(revs.Get(id), &rev); err != nil {
+			rev, err := readRecord(revs.Get(id))
+			if err != nil {
 				return optics.Errorf(optics.EInternal, "stored revision %s is unreadable: %v", id, err)
 			}
 			out = append(out, rev)

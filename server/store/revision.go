@@ -3,6 +3,7 @@ package store
 import (
 	"crypto/rand"
 	"encoding/base32"
+	"encoding/json"
 	"io"
 	"regexp"
 	"time"
@@ -19,13 +20,14 @@ var idEncoding = base32.NewEncoding("abcdefghijklmnopqrstuvwxyz234567").WithPadd
 
 var idPattern = regexp.MustCompile(`^[a-z2-7]{24}$`)
 
-// Revision is one stored design. It never changes after Put.
+// Revision is one stored design. It never changes after Put. The bolt file keeps it as a record
+// (record.go).
 type Revision struct {
-	ID      string    `json:"id"`
-	Parent  string    `json:"parent,omitempty"` // "" for a design started from scratch, the demo or an import
-	Created time.Time `json:"created"`
-	Bench   []byte    `json:"bench"`   // canonical bench JSON from optics.Encode
-	Summary string    `json:"summary"` // one line for lists: the title, or what changed
+	ID      string
+	Parent  string // "" for a design started from scratch, the demo or an import
+	Created time.Time
+	Bench   json.RawMessage // the canonical bench file, encoded once (optics.Encode); kept as it is
+	Summary string          // one line for lists: the title, or what changed
 }
 
 // NewID returns a fresh random id read from r (crypto/rand.Reader when r is nil).
@@ -60,6 +62,10 @@ func checkPut(rev Revision) error {
 	}
 	if len(rev.Bench) == 0 {
 		return optics.Errorf(optics.EInternal, "revision %s has no bench", rev.ID)
+	}
+	// A record embeds the bench as it is (record.go): it must be a JSON object from its first byte.
+	if rev.Bench[0] != '{' || !json.Valid(rev.Bench) {
+		return optics.Errorf(optics.EInternal, "revision %s: the bench is not a JSON object", rev.ID)
 	}
 	return nil
 }
