@@ -21,13 +21,9 @@ func computeBench(e env, path string) (*optics.Report, int) {
 		fmt.Fprintf(e.stderr, "raytable: %v\n", err)
 		return nil, exitInvalid
 	}
-	b, err := optics.Decode(data)
+	b, err := optics.Decode(data) // Decode validates; the report then needs no second check
 	if err == nil {
-		var r *optics.Report
-		r, err = analysis.Run(b)
-		if err == nil {
-			return r, exitOK
-		}
+		return analysis.RunValid(b), exitOK
 	}
 	if code := optics.ErrorCode(err); code == optics.EInternal {
 		fmt.Fprintf(e.stderr, "raytable: internal failure: %v\n", err)
