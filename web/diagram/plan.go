@@ -8,8 +8,6 @@ import (
 	"raytable/optics/numfmt"
 )
 
-// LaserCaution is the text of the cautions box on the printed plan.
-const LaserCaution = optics.CautionParagraph
 
 // CheckBarLabel is printed above the plan's 100 mm check bar.
 const CheckBarLabel = "print at 100 %: this bar must measure 100 mm"
@@ -51,7 +49,7 @@ func Plan(r *optics.Report) []byte {
 	y := tableTop + t.depthMM() + 12
 	posts := postLines(r.Placement, chars)
 	warns := warningLines(r.Warnings, chars-4)
-	caution := wrap(LaserCaution, chars-4)
+	caution := wrap(optics.CautionText(), chars-4)
 	h := y
 	if len(posts) > 0 {
 		h += planLineMM*float64(len(posts)+1) + 4

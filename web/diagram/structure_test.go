@@ -143,7 +143,7 @@ func TestWrap(t *testing.T) {
 	if fmt.Sprint(lines) != fmt.Sprint(want) {
 		t.Errorf("wrap = %q, want %q", lines, want)
 	}
-	if strings.Join(wrap(LaserCaution, 60), " ") != LaserCaution {
+	if strings.Join(wrap(optics.CautionText(), 60), " ") != optics.CautionText() {
 		t.Error("wrapping loses words")
 	}
 }

@@ -124,7 +124,7 @@ func TestPlanIsTrueSize(t *testing.T) {
 			caution = append(caution, c.Text)
 		}
 	}
-	if strings.Join(caution, " ") != LaserCaution {
+	if strings.Join(caution, " ") != optics.CautionText() {
 		t.Errorf("cautions box reads %q", strings.Join(caution, " "))
 	}
 	for _, p := range r.Placement {
