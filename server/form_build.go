@@ -18,13 +18,13 @@ func benchValues(b *optics.Bench) map[string]string {
 		"notes":                    b.Notes,
 		"wavelengths_nm":           numList(b.WavelengthsNM),
 		"table.grid":               b.Table.Grid,
-		"table.width_mm":           formatNumber(b.Table.WidthMM),
-		"table.depth_mm":           formatNumber(b.Table.DepthMM),
-		"table.beam_height_mm":     formatNumber(b.Table.BeamHeightMM),
+		"table.width_mm":           optics.FormatNumber(b.Table.WidthMM),
+		"table.depth_mm":           optics.FormatNumber(b.Table.DepthMM),
+		"table.beam_height_mm":     optics.FormatNumber(b.Table.BeamHeightMM),
 		"table.hole_offset_mm":     optText(b.Table.HoleOffsetMM),
-		"source.x_mm":              formatNumber(b.Source.XMM),
-		"source.y_mm":              formatNumber(b.Source.YMM),
-		"source.heading_deg":       formatNumber(b.Source.HeadingDeg),
+		"source.x_mm":              optics.FormatNumber(b.Source.XMM),
+		"source.y_mm":              optics.FormatNumber(b.Source.YMM),
+		"source.heading_deg":       optics.FormatNumber(b.Source.HeadingDeg),
 		"source.kind":              b.Source.Kind,
 		"source._kind_shown":       b.Source.Kind,
 		"source.semi_diameter_mm":  optText(b.Source.SemiDiameterMM),
@@ -36,16 +36,16 @@ func benchValues(b *optics.Bench) map[string]string {
 		v["source.fan_rays"] = strconv.Itoa(*b.Source.FanRays)
 	}
 	if bm := b.Source.Beam; bm != nil {
-		v["source.beam.waist_radius_mm"] = formatNumber(bm.WaistRadiusMM)
-		v["source.beam.waist_at_mm"] = formatNumber(bm.WaistAtMM)
+		v["source.beam.waist_radius_mm"] = optics.FormatNumber(bm.WaistRadiusMM)
+		v["source.beam.waist_at_mm"] = optics.FormatNumber(bm.WaistAtMM)
 		v["source.beam.m2"] = optText(bm.M2)
 	}
 	for i, r := range b.Source.Rays {
 		p := fmt.Sprintf("source.rays[%d].", i)
-		v[p+"height_mm"] = formatNumber(r.HeightMM)
-		v[p+"angle_deg"] = formatNumber(r.AngleDeg)
-		v[p+"x_mm"] = formatNumber(r.XMM)
-		v[p+"x_angle_deg"] = formatNumber(r.XAngleDeg)
+		v[p+"height_mm"] = optics.FormatNumber(r.HeightMM)
+		v[p+"angle_deg"] = optics.FormatNumber(r.AngleDeg)
+		v[p+"x_mm"] = optics.FormatNumber(r.XMM)
+		v[p+"x_angle_deg"] = optics.FormatNumber(r.XAngleDeg)
 	}
 	if len(b.Materials) > 0 {
 		if data, err := json.MarshalIndent(b.Materials, "", "  "); err == nil {
@@ -57,7 +57,7 @@ func benchValues(b *optics.Bench) map[string]string {
 		v[p+"id"] = e.ID
 		v[p+"type"] = e.Type
 		v[p+"_type_shown"] = e.Type
-		v[p+"gap_mm"] = formatNumber(e.GapMM)
+		v[p+"gap_mm"] = optics.FormatNumber(e.GapMM)
 		v[p+"faces_mm"] = facesText(e.FacesMM)
 		v[p+"thicknesses_mm"] = numList(e.ThicknessesMM)
 		v[p+"materials"] = strings.Join(e.Materials, ", ")
@@ -69,8 +69,8 @@ func benchValues(b *optics.Bench) map[string]string {
 		v[p+"diameter_mm"] = optText(e.DiameterMM)
 		v[p+"width_mm"] = optText(e.WidthMM)
 		if e.Mount != nil {
-			v[p+"mount.width_mm"] = formatNumber(e.Mount.WidthMM)
-			v[p+"mount.depth_mm"] = formatNumber(e.Mount.DepthMM)
+			v[p+"mount.width_mm"] = optics.FormatNumber(e.Mount.WidthMM)
+			v[p+"mount.depth_mm"] = optics.FormatNumber(e.Mount.DepthMM)
 		}
 	}
 	return v
@@ -79,7 +79,7 @@ func benchValues(b *optics.Bench) map[string]string {
 func numList(xs []float64) string {
 	parts := make([]string, len(xs))
 	for i, x := range xs {
-		parts[i] = formatNumber(x)
+		parts[i] = optics.FormatNumber(x)
 	}
 	return strings.Join(parts, ", ")
 }
@@ -90,7 +90,7 @@ func optTextOr(x *float64, none string) string {
 	if x == nil {
 		return none
 	}
-	return formatNumber(*x)
+	return optics.FormatNumber(*x)
 }
 
 func facesText(faces []*float64) string {

@@ -44,13 +44,13 @@ func (f *formReader) get(path string) string {
 func (f *formReader) text(path string) string { return strings.TrimSpace(f.get(path)) }
 
 // num reads a required number.
-func (f *formReader) num(path string, q quantity) float64 {
+func (f *formReader) num(path string, q *optics.Quantity) float64 {
 	s := f.text(path)
 	if s == "" {
-		f.add(path, "is required; %s", q.hint)
+		f.add(path, "is required; %s", q.Hint)
 		return 0
 	}
-	v, err := q.parse(s)
+	v, err := q.Parse(s)
 	if err != nil {
 		f.add(path, "%s", err)
 	}
@@ -58,12 +58,12 @@ func (f *formReader) num(path string, q quantity) float64 {
 }
 
 // optNum reads an optional number; an empty field is nil.
-func (f *formReader) optNum(path string, q quantity) *float64 {
+func (f *formReader) optNum(path string, q *optics.Quantity) *float64 {
 	s := f.text(path)
 	if s == "" {
 		return nil
 	}
-	v, err := q.parse(s)
+	v, err := q.Parse(s)
 	if err != nil {
 		f.add(path, "%s", err)
 		return nil
@@ -84,14 +84,14 @@ func splitList(s string) []string {
 }
 
 // list reads a comma list of numbers; the problem of item i is at path[i].
-func (f *formReader) list(path string, q quantity) []float64 {
+func (f *formReader) list(path string, q *optics.Quantity) []float64 {
 	items := splitList(f.get(path))
 	if items == nil {
 		return nil
 	}
 	out := make([]float64, len(items))
 	for i, s := range items {
-		v, err := q.parse(s)
+		v, err := q.Parse(s)
 		if err != nil {
 			f.add(fmt.Sprintf("%s[%d]", path, i), "%s", err)
 		}
@@ -113,7 +113,7 @@ func (f *formReader) faces(path string) []*float64 {
 		if s == "" || strings.EqualFold(s, "flat") {
 			continue
 		}
-		v, err := length.parse(s)
+		v, err := optics.Length.Parse(s)
 		if err != nil {
 			f.add(fmt.Sprintf("%s[%d]", path, i), "%s, or flat", err)
 			continue
@@ -129,7 +129,7 @@ func (f *formReader) radius(path string) *float64 {
 	if s == "" || strings.EqualFold(s, "flat") {
 		return nil
 	}
-	return f.optNum(path, length)
+	return f.optNum(path, optics.Length)
 }
 
 // count reads an optional whole number.
@@ -154,14 +154,14 @@ func parseBenchForm(vals url.Values) (*optics.Bench, []optics.Problem) {
 		Format:        optics.FormatBenchV1,
 		Title:         f.text("title"),
 		Notes:         strings.TrimSpace(strings.ReplaceAll(f.get("notes"), "\r\n", "\n")),
-		WavelengthsNM: f.list("wavelengths_nm", wavelength),
+		WavelengthsNM: f.list("wavelengths_nm", optics.Wavelength),
 	}
 	b.Table = optics.Table{
 		Grid:         f.text("table.grid"),
-		WidthMM:      f.num("table.width_mm", length),
-		DepthMM:      f.num("table.depth_mm", length),
-		BeamHeightMM: f.num("table.beam_height_mm", length),
-		HoleOffsetMM: f.optNum("table.hole_offset_mm", length),
+		WidthMM:      f.num("table.width_mm", optics.Length),
+		DepthMM:      f.num("table.depth_mm", optics.Length),
+		BeamHeightMM: f.num("table.beam_height_mm", optics.Length),
+		HoleOffsetMM: f.optNum("table.hole_offset_mm", optics.Length),
 	}
 	b.Source = f.source()
 	b.Materials = f.materials()
@@ -177,9 +177,9 @@ func parseBenchForm(vals url.Values) (*optics.Bench, []optics.Problem) {
 
 func (f *formReader) source() optics.Source {
 	s := optics.Source{
-		XMM:        f.num("source.x_mm", length),
-		YMM:        f.num("source.y_mm", length),
-		HeadingDeg: f.num("source.heading_deg", angle),
+		XMM:        f.num("source.x_mm", optics.Length),
+		YMM:        f.num("source.y_mm", optics.Length),
+		HeadingDeg: f.num("source.heading_deg", optics.Angle),
 		Kind:       f.text("source.kind"),
 		FanRays:    f.count("source.fan_rays"),
 	}
@@ -191,34 +191,34 @@ func (f *formReader) source() optics.Source {
 	} else {
 		switch s.Kind {
 		case optics.SourceCollimated:
-			s.SemiDiameterMM = f.optNum("source.semi_diameter_mm", length)
-			s.FieldAnglesDeg = f.list("source.field_angles_deg", angle)
+			s.SemiDiameterMM = f.optNum("source.semi_diameter_mm", optics.Length)
+			s.FieldAnglesDeg = f.list("source.field_angles_deg", optics.Angle)
 		case optics.SourcePoint:
-			s.NA = f.optNum("source.na", plain)
-			s.ObjectHeightsMM = f.list("source.object_heights_mm", length)
+			s.NA = f.optNum("source.na", optics.Plain)
+			s.ObjectHeightsMM = f.list("source.object_heights_mm", optics.Length)
 		}
 	}
 	for i := 0; f.has(fmt.Sprintf("source.rays[%d].height_mm", i)) && i < maxFormElements; i++ {
 		p := fmt.Sprintf("source.rays[%d].", i)
 		s.Rays = append(s.Rays, optics.ExplicitRay{
-			HeightMM:  f.num(p+"height_mm", length),
-			AngleDeg:  f.num(p+"angle_deg", angle),
-			XMM:       f.zeroNum(p+"x_mm", length),
-			XAngleDeg: f.zeroNum(p+"x_angle_deg", angle),
+			HeightMM:  f.num(p+"height_mm", optics.Length),
+			AngleDeg:  f.num(p+"angle_deg", optics.Angle),
+			XMM:       f.zeroNum(p+"x_mm", optics.Length),
+			XAngleDeg: f.zeroNum(p+"x_angle_deg", optics.Angle),
 		})
 	}
 	if f.text("source.beam.waist_radius_mm")+f.text("source.beam.waist_at_mm")+f.text("source.beam.m2") != "" {
 		s.Beam = &optics.Beam{
-			WaistRadiusMM: f.num("source.beam.waist_radius_mm", length),
-			WaistAtMM:     f.zeroNum("source.beam.waist_at_mm", length),
-			M2:            f.optNum("source.beam.m2", plain),
+			WaistRadiusMM: f.num("source.beam.waist_radius_mm", optics.Length),
+			WaistAtMM:     f.zeroNum("source.beam.waist_at_mm", optics.Length),
+			M2:            f.optNum("source.beam.m2", optics.Plain),
 		}
 	}
 	return s
 }
 
 // zeroNum reads a number whose empty field means 0.
-func (f *formReader) zeroNum(path string, q quantity) float64 {
+func (f *formReader) zeroNum(path string, q *optics.Quantity) float64 {
 	if f.text(path) == "" {
 		return 0
 	}
@@ -252,12 +252,12 @@ func (f *formReader) element(i int) optics.Element {
 		e = defaultElement(typ)
 		e.ID = f.text(p + "id")
 		if takesDiameter(typ) && takesDiameter(shown) {
-			e.DiameterMM = f.optNum(p+"diameter_mm", length)
+			e.DiameterMM = f.optNum(p+"diameter_mm", optics.Length)
 		}
 	}
-	e.GapMM = f.num(p+"gap_mm", length)
+	e.GapMM = f.num(p+"gap_mm", optics.Length)
 	if f.text(p+"mount.width_mm")+f.text(p+"mount.depth_mm") != "" {
-		e.Mount = &optics.Mount{WidthMM: f.num(p+"mount.width_mm", length), DepthMM: f.num(p+"mount.depth_mm", length)}
+		e.Mount = &optics.Mount{WidthMM: f.num(p+"mount.width_mm", optics.Length), DepthMM: f.num(p+"mount.depth_mm", optics.Length)}
 	}
 	if changed {
 		return e
@@ -265,26 +265,26 @@ func (f *formReader) element(i int) optics.Element {
 	switch typ {
 	case optics.TypeLens:
 		e.FacesMM = f.faces(p + "faces_mm")
-		e.ThicknessesMM = f.list(p+"thicknesses_mm", length)
+		e.ThicknessesMM = f.list(p+"thicknesses_mm", optics.Length)
 		e.Materials = splitList(f.get(p + "materials"))
-		e.DiameterMM = f.optNum(p+"diameter_mm", length)
+		e.DiameterMM = f.optNum(p+"diameter_mm", optics.Length)
 	case optics.TypeThinLens:
-		e.FocalMM = f.optNum(p+"focal_mm", length)
+		e.FocalMM = f.optNum(p+"focal_mm", optics.Length)
 		if e.FocalMM == nil && !f.problemAt(p+"focal_mm") {
 			f.add(p+"focal_mm", "is required; use a length such as 100 mm")
 		}
-		e.DiameterMM = f.optNum(p+"diameter_mm", length)
+		e.DiameterMM = f.optNum(p+"diameter_mm", optics.Length)
 	case optics.TypeMirror:
 		e.RadiusMM = f.radius(p + "radius_mm")
-		e.TurnDeg = f.optNum(p+"turn_deg", angle)
+		e.TurnDeg = f.optNum(p+"turn_deg", optics.Angle)
 		if e.TurnDeg == nil && !f.problemAt(p+"turn_deg") {
 			f.add(p+"turn_deg", "is required; use the heading change in degrees, e.g. 90")
 		}
-		e.DiameterMM = f.optNum(p+"diameter_mm", length)
+		e.DiameterMM = f.optNum(p+"diameter_mm", optics.Length)
 	case optics.TypeAperture:
-		e.DiameterMM = f.optNum(p+"diameter_mm", length)
+		e.DiameterMM = f.optNum(p+"diameter_mm", optics.Length)
 	case optics.TypeScreen:
-		e.WidthMM = f.optNum(p+"width_mm", length)
+		e.WidthMM = f.optNum(p+"width_mm", optics.Length)
 	}
 	return e
 }

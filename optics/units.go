@@ -1,4 +1,4 @@
-package server
+package optics
 
 import (
 	"fmt"
@@ -7,11 +7,14 @@ import (
 	"strings"
 )
 
-// quantity says how a form field's text becomes a number: which units people may type and what
-// the rule is called in messages.
-type quantity struct {
-	noun  string             // "a length", used as `"abc" is not a length`
-	hint  string             // how to write one, appended to the message
+// Quantity is what a number measures: how typed text becomes the stored number (which units people
+// may write after it), the stored unit shown beside an input, and what messages call it. The bench
+// file itself holds bare numbers in the stored unit; units are for people typing (a form, a future
+// command line editor).
+type Quantity struct {
+	Noun  string             // "a length", used as `"abc" is not a length`
+	Hint  string             // how to write one, appended to the message
+	Unit  string             // the stored unit as people read it: "mm", "nm", "°", or "" for a plain number
 	units map[string]float64 // unit suffix -> factor to the stored unit; "" is the bare number
 }
 
@@ -21,23 +24,24 @@ var lengthUnits = map[string]float64{
 	"in": 25.4, "inch": 25.4, "inches": 25.4, `"`: 25.4,
 }
 
+// The quantities of the bench file's numbers.
 var (
-	length     = quantity{"a length", "use a number in mm or a unit such as 1 in, 2.5 cm", lengthUnits}
-	wavelength = quantity{"a wavelength", "use a number in nm or a unit such as 1.064 um", map[string]float64{
+	Length     = &Quantity{"a length", "use a number in mm or a unit such as 1 in, 2.5 cm", "mm", lengthUnits}
+	Wavelength = &Quantity{"a wavelength", "use a number in nm or a unit such as 1.064 um", "nm", map[string]float64{
 		"": 1, "nm": 1, "um": 1000, "µm": 1000, "μm": 1000}}
-	angle = quantity{"an angle", "use a number of degrees", map[string]float64{
+	Angle = &Quantity{"an angle", "use a number of degrees", "°", map[string]float64{
 		"": 1, "deg": 1, "°": 1}}
-	plain = quantity{"a number", "use a plain number such as 0.1", map[string]float64{"": 1}}
+	Plain = &Quantity{"a number", "use a plain number such as 0.1", "", map[string]float64{"": 1}} // a ratio: NA, M²
 )
 
-// maxMagnitude is the largest number a field accepts before the bench rules even look at it;
+// MaxTypedMagnitude is the largest number Parse accepts before the bench rules even look at it;
 // anything larger is a slip of the keyboard.
-const maxMagnitude = 1e12
+const MaxTypedMagnitude = 1e12
 
-// parse reads one value with an optional unit, e.g. "25.4", "1 in", `1"`, "2.5cm", "500 µm".
+// Parse reads one value with an optional unit, e.g. "25.4", "1 in", `1"`, "2.5cm", "500 µm".
 // A decimal comma ("1,5") and fractions ("1/2 in") are refused with a message saying how to write
 // the number instead: commas separate the items of list fields, so "1,5" could mean two values.
-func (q quantity) parse(text string) (float64, error) {
+func (q *Quantity) Parse(text string) (float64, error) {
 	s := strings.TrimSpace(text)
 	num, unit := splitUnit(s)
 	factor, ok := q.units[strings.ToLower(unit)]
@@ -47,22 +51,22 @@ func (q quantity) parse(text string) (float64, error) {
 	if num == "" || !ok {
 		switch {
 		case num != "" && strings.HasPrefix(unit, ","):
-			return 0, fmt.Errorf("%q is not %s; write decimals with a point, e.g. 1.5", text, q.noun)
+			return 0, fmt.Errorf("%q is not %s; write decimals with a point, e.g. 1.5", text, q.Noun)
 		case num != "" && strings.HasPrefix(unit, "/"):
-			return 0, fmt.Errorf("%q is not %s; fractions are not read, write a decimal such as 0.5 in", text, q.noun)
+			return 0, fmt.Errorf("%q is not %s; fractions are not read, write a decimal such as 0.5 in", text, q.Noun)
 		}
-		return 0, fmt.Errorf("%q is not %s; %s", text, q.noun, q.hint)
+		return 0, fmt.Errorf("%q is not %s; %s", text, q.Noun, q.Hint)
 	}
 	v, err := strconv.ParseFloat(num, 64)
 	if err != nil || math.IsNaN(v) || math.IsInf(v, 0) {
 		if ne, isNum := err.(*strconv.NumError); isNum && ne.Err == strconv.ErrRange {
-			return 0, fmt.Errorf("%q is too large to be %s", text, q.noun)
+			return 0, fmt.Errorf("%q is too large to be %s", text, q.Noun)
 		}
-		return 0, fmt.Errorf("%q is not %s; %s", text, q.noun, q.hint)
+		return 0, fmt.Errorf("%q is not %s; %s", text, q.Noun, q.Hint)
 	}
 	v *= factor
-	if math.Abs(v) > maxMagnitude {
-		return 0, fmt.Errorf("%q is too large to be %s", text, q.noun)
+	if math.Abs(v) > MaxTypedMagnitude {
+		return 0, fmt.Errorf("%q is too large to be %s", text, q.Noun)
 	}
 	if v == 0 {
 		v = 0 // "-0" is stored as 0, not as a negative zero that the history would show as "-0"
@@ -88,9 +92,9 @@ func splitUnit(s string) (num, unit string) {
 
 func isDigit(c byte) bool { return c >= '0' && c <= '9' }
 
-// formatNumber writes a stored value back into a form field: the shortest text that reads back to
+// FormatNumber writes a stored value as people edit it: the shortest text that Parse reads back to
 // the same float64, without exponents for everyday sizes.
-func formatNumber(v float64) string {
+func FormatNumber(v float64) string {
 	a := math.Abs(v)
 	if a == 0 || (a >= 1e-4 && a < 1e9) {
 		return strconv.FormatFloat(v, 'f', -1, 64)
