@@ -38,6 +38,7 @@ type Field struct {
 	About    string // for a required kind field: what it is, ending that message ("…, the radius of the ray bundle")
 	Hint     string // for a required optional number: a form says "is required; " + Hint when it is left empty
 
+	Selects   bool   // the field picks the object's kind: an element's type, a source's kind
 	Flat      bool   // null is accepted and means flat (a face or mirror radius); a form writes it "flat"
 	Absent    string // what an absent optional value means, as the history shows it: "none" unless set
 	Prose     bool   // free text: the history says only that it changed
@@ -147,7 +148,7 @@ var (
 		{Key: "x_mm", Label: "x on the table", Quantity: Length, Required: true},
 		{Key: "y_mm", Label: "y on the table", Quantity: Length, Required: true},
 		{Key: "heading_deg", Label: "heading", Quantity: Angle, Required: true},
-		{Key: "kind", Label: "kind", Required: true},
+		{Key: "kind", Label: "kind", Required: true, Selects: true},
 		{Key: "rays", Fields: RayFields},
 		{Key: "beam", Fields: BeamFields},
 		{Key: "fan_rays", Label: "rays per fan (empty: " + strconv.Itoa(DefaultFanRays) + ")", Absent: strconv.Itoa(DefaultFanRays)},
@@ -177,7 +178,7 @@ var (
 	// ElementFields are the fields of every element; each type adds its own (Kinds).
 	ElementFields = []Field{
 		{Key: "id", Label: "id", Required: true},
-		{Key: "type", Label: "type", Required: true},
+		{Key: "type", Label: "type", Required: true, Selects: true},
 		{Key: "gap_mm", Label: "gap from the previous element", Quantity: Length, Required: true},
 		{Key: "mount", Fields: MountFields},
 	}

@@ -210,6 +210,8 @@ func TestTypeChangeKeepsWhatCarriesOver(t *testing.T) {
 	}
 }
 
+// TestApplyAction: each button is one of optics' edits (tested there); a button that names
+// nothing, or a type that does not exist, is a problem at its input.
 func TestApplyAction(t *testing.T) {
 	mk := func() *optics.Bench {
 		b, err := optics.Decode([]byte(everyField))
@@ -218,26 +220,21 @@ func TestApplyAction(t *testing.T) {
 		}
 		return b
 	}
-	for _, typ := range elementTypes {
-		b := mk()
-		if ps := applyAction(b, "add", typ, "3"); ps != nil {
-			t.Fatalf("add %s: %v", typ, ps)
-		}
-		if b.Elements[3].Type != typ {
-			t.Errorf("add %s at 3: got %s", typ, b.Elements[3].Type)
-		}
-		if err := optics.Validate(b); err != nil {
-			t.Errorf("bench after adding a default %s is invalid: %v", typ, err)
-		}
-	}
 	b := mk()
 	applyAction(b, "add", optics.TypeScreen, "")
 	if got := b.Elements[len(b.Elements)-1].ID; got != "S3" {
-		t.Errorf("new screen id %q, want S3 (S1 and S2 are taken)", got)
+		t.Errorf("new screen id %q, want S3 at the end (S1 and S2 are taken)", got)
+	}
+	b = mk()
+	if ps := applyAction(b, "down:0", "", ""); ps != nil || b.Elements[1].ID != "L1" {
+		t.Errorf("down:0 gave %v, elements[1] %s", ps, b.Elements[1].ID)
 	}
 	for _, bad := range []string{"down:7", "up:0", "delete:-1", "delete:x", "delete-ray:1", "fly"} {
 		if ps := applyAction(mk(), bad, "", ""); len(ps) != 1 || ps[0].Path != "action" {
 			t.Errorf("action %q: %v", bad, ps)
 		}
+	}
+	if ps := applyAction(mk(), "add", "prism", "1"); len(ps) != 1 || ps[0].Path != "add.type" || !strings.HasPrefix(ps[0].Message, `unknown element type "prism"`) {
+		t.Errorf("adding a prism: %v", ps)
 	}
 }
