@@ -151,7 +151,10 @@ func elementUnion() []Field {
 	return union(tables...)
 }
 
-// kindFieldsOnly is allElementFields without the common ones: the fields that belong to a type.
+// elementKindFields are the fields that belong to one element type or another.
+var elementKindFields = kindFieldsOnly(allElementFields, ElementFields)
+
+// kindFieldsOnly is all without the fields of common: the fields that belong to one kind or another.
 func kindFieldsOnly(all, common []Field) []Field {
 	var out []Field
 	for _, f := range all {

@@ -65,3 +65,6 @@ func sourceUnion() []Field {
 	}
 	return union(tables...)
 }
+
+// sourceKindFields are the fields that belong to one source kind or another.
+var sourceKindFields = kindFieldsOnly(allSourceFields, SourceFields)

@@ -260,9 +260,6 @@ func (v *checker) need(path string, obj reflect.Value, fields []Field, noun stri
 	}
 }
 
-// sourceKindFields are the fields that belong to one source kind or another.
-var sourceKindFields = kindFieldsOnly(allSourceFields, SourceFields)
-
 func sourceKindNames() []string {
 	out := make([]string, len(SourceKinds))
 	for i, k := range SourceKinds {

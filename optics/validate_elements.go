@@ -41,9 +41,6 @@ func (v *checker) elements() {
 	}
 }
 
-// elementKindFields are the fields that belong to one element type or another.
-var elementKindFields = kindFieldsOnly(allElementFields, ElementFields)
-
 // elementID checks that an id is non-empty, short, plain and not used before.
 func (v *checker) elementID(p, id string, i int, firstUse map[string]int) {
 	ip := field(p, "id")
