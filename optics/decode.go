@@ -98,55 +98,50 @@ func (r *reader) bench(data []byte) *Bench {
 // source reads the source; its kind decides which keys it may have.
 func (r *reader) source(path string, raw json.RawMessage) Source {
 	var s Source
-	members, ok := r.object(path, raw)
-	if !ok {
-		return s
-	}
-	r.require(path, members, requiredKeys(SourceFields)...)
-	// The kind decides which keys are allowed; read it first.
-	if kindRaw, ok := lookup(members, "kind"); ok {
-		s.Kind, _ = r.str(field(path, "kind"), kindRaw)
-	}
-	if k, known := SourceKindOf(s.Kind); known {
-		r.unknown(path, members, " for a "+k.Noun, keys(SourceFields), keys(k.Fields))
-	} else {
-		// An unknown kind is reported by Validate; judge keys against every kind.
-		r.unknown(path, members, "", keys(allSourceFields))
-	}
-	r.into(path, members, allSourceFields, reflect.ValueOf(&s).Elem(), "kind")
+	r.kinded(path, raw, SourceFields, allSourceFields, reflect.ValueOf(&s).Elem(), func(kind string) ([]Field, string, bool) {
+		k, ok := SourceKindOf(kind)
+		if !ok {
+			return nil, "", false
+		}
+		return k.Fields, " for a " + k.Noun, true
+	})
 	return s
 }
 
 // element reads one element; its type decides which keys it may have.
 func (r *reader) element(path string, raw json.RawMessage) Element {
 	var e Element
-	members, ok := r.object(path, raw)
-	if !ok {
-		return e
-	}
-	r.require(path, members, requiredKeys(ElementFields)...)
-	// The type decides which keys are allowed; read it first.
-	if typeRaw, ok := lookup(members, "type"); ok {
-		e.Type, _ = r.str(field(path, "type"), typeRaw)
-	}
-	if k, known := KindOf(e.Type); known {
-		r.unknown(path, members, " for type "+e.Type, keys(ElementFields), keys(k.Fields))
-	} else {
-		// An unknown type is reported by Validate; judge keys against every type.
-		r.unknown(path, members, "", keys(allElementFields))
-	}
-	r.into(path, members, allElementFields, reflect.ValueOf(&e).Elem(), "type")
+	r.kinded(path, raw, ElementFields, allElementFields, reflect.ValueOf(&e).Elem(), func(typ string) ([]Field, string, bool) {
+		k, ok := KindOf(typ)
+		if !ok {
+			return nil, "", false
+		}
+		return k.Fields, " for type " + typ, true
+	})
 	return e
 }
 
-// materialPath is the JSON path of a user material: materials.NAME when the name is a plain word,
-// materials["NAME"] (JSON-quoted) otherwise, so that dots or spaces in a name stay unambiguous.
-func materialPath(name string) string {
-	if name != "" && plainName(name) && !strings.Contains(name, ".") {
-		return "materials." + name
+// kinded reads an object whose selector (a source's kind, an element's type) decides which keys it
+// may have: the common ones and its kind's own, which own gives with how messages name the kind.
+// A kind that is not known is Validate's to report; keys are then judged against every kind's.
+func (r *reader) kinded(path string, raw json.RawMessage, common, all []Field, dst reflect.Value, own func(kind string) ([]Field, string, bool)) {
+	members, ok := r.object(path, raw)
+	if !ok {
+		return
 	}
-	q, _ := json.Marshal(name)
-	return "materials[" + string(q) + "]"
+	r.require(path, members, requiredKeys(common)...)
+	sel := common[slices.IndexFunc(common, func(f Field) bool { return f.Selects })]
+	// The kind decides which keys are allowed; read it first.
+	if kindRaw, ok := lookup(members, sel.Key); ok {
+		kind, _ := r.str(field(path, sel.Key), kindRaw)
+		sel.value(dst).SetString(kind)
+	}
+	if fields, why, known := own(sel.value(dst).String()); known {
+		r.unknown(path, members, why, keys(common), keys(fields))
+	} else {
+		r.unknown(path, members, "", keys(all))
+	}
+	r.into(path, members, all, dst, sel.Key)
 }
 
 func (r *reader) materials(path string, raw json.RawMessage) map[string]MaterialSpec {
@@ -161,4 +156,14 @@ func (r *reader) materials(path string, raw json.RawMessage) map[string]Material
 		out[m.key] = spec
 	}
 	return out
+}
+
+// materialPath is the JSON path of a user material: materials.NAME when the name is a plain word,
+// materials["NAME"] (JSON-quoted) otherwise, so that dots or spaces in a name stay unambiguous.
+func materialPath(name string) string {
+	if name != "" && plainName(name) && !strings.Contains(name, ".") {
+		return "materials." + name
+	}
+	q, _ := json.Marshal(name)
+	return "materials[" + string(q) + "]"
 }

@@ -200,26 +200,26 @@ func FieldsOf(obj any) []Field {
 	return fieldsOf(t)
 }
 
-func fieldsOf(t reflect.Type) []Field {
-	switch t {
-	case reflect.TypeFor[Bench]():
-		return BenchFields
-	case reflect.TypeFor[Table]():
-		return TableFields
-	case reflect.TypeFor[Source]():
-		return allSourceFields
-	case reflect.TypeFor[ExplicitRay]():
-		return RayFields
-	case reflect.TypeFor[Beam]():
-		return BeamFields
-	case reflect.TypeFor[MaterialSpec]():
-		return MaterialFields
-	case reflect.TypeFor[SellmeierSpec]():
-		return SellmeierFields
-	case reflect.TypeFor[Element]():
-		return allElementFields
-	case reflect.TypeFor[Mount]():
-		return MountFields
+func fieldsOf(t reflect.Type) []Field { return tables[t] }
+
+// tables maps each object type of the bench file to its table.
+var tables = map[reflect.Type][]Field{
+	reflect.TypeFor[Bench]():         BenchFields,
+	reflect.TypeFor[Table]():         TableFields,
+	reflect.TypeFor[Source]():        allSourceFields,
+	reflect.TypeFor[ExplicitRay]():   RayFields,
+	reflect.TypeFor[Beam]():          BeamFields,
+	reflect.TypeFor[MaterialSpec]():  MaterialFields,
+	reflect.TypeFor[SellmeierSpec](): SellmeierFields,
+	reflect.TypeFor[Element]():       allElementFields,
+	reflect.TypeFor[Mount]():         MountFields,
+}
+
+// withKinds is common followed by the fields of every kind, each key once (see union).
+func withKinds[K any](common []Field, kinds []K, fields func(K) []Field) []Field {
+	tables := [][]Field{common}
+	for _, k := range kinds {
+		tables = append(tables, fields(k))
 	}
-	return nil
+	return union(tables...)
 }

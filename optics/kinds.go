@@ -141,15 +141,7 @@ func KindTypes() []string {
 }
 
 // allElementFields holds the common element fields and then every type's, each key once.
-var allElementFields = elementUnion()
-
-func elementUnion() []Field {
-	tables := [][]Field{ElementFields}
-	for _, k := range Kinds {
-		tables = append(tables, k.Fields)
-	}
-	return union(tables...)
-}
+var allElementFields = withKinds(ElementFields, Kinds, func(k Kind) []Field { return k.Fields })
 
 // elementKindFields are the fields that belong to one element type or another.
 var elementKindFields = kindFieldsOnly(allElementFields, ElementFields)

@@ -56,15 +56,7 @@ func SourceKindOrFirst(kind string) *SourceKind {
 }
 
 // allSourceFields holds the common source fields and then every kind's, each key once.
-var allSourceFields = sourceUnion()
-
-func sourceUnion() []Field {
-	tables := [][]Field{SourceFields}
-	for _, k := range SourceKinds {
-		tables = append(tables, k.Fields)
-	}
-	return union(tables...)
-}
+var allSourceFields = withKinds(SourceFields, SourceKinds, func(k SourceKind) []Field { return k.Fields })
 
 // sourceKindFields are the fields that belong to one source kind or another.
 var sourceKindFields = kindFieldsOnly(allSourceFields, SourceFields)

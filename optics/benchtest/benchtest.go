@@ -15,8 +15,12 @@ import (
 	"raytable/optics"
 )
 
-// skeleton holds everything but the elements, with every optional field set.
-const skeleton = `{
+// EveryFieldJSON is a bench file written by hand for tests that pick particular fields and
+// elements: a mount, user materials of all three kinds, explicit rays, a beam, a hole offset, a fan
+// size and elements of every type, among them a three-face lens of user glasses, a window of two
+// flat faces and a screen without a width. EveryField, built from the tables, also covers types and
+// fields added after it was written.
+const EveryFieldJSON = `{
   "format": "raytable/bench/v1",
   "title": "every field <&>",
   "notes": "line one\nline two",
@@ -31,18 +35,29 @@ const skeleton = `{
     "my-flint": {"nd": 1.6727, "vd": 32.2},
     "oil": {"index": 1.515}
   },
-  "elements": []
+  "elements": [
+    {"id": "L1", "type": "lens", "gap_mm": 100, "faces_mm": [60, -40, null], "thicknesses_mm": [5, 2], "materials": ["my-glass", "my-flint"], "diameter_mm": 25.4, "mount": {"width_mm": 40, "depth_mm": 20}},
+    {"id": "F1", "type": "thin-lens", "gap_mm": 80, "focal_mm": 100},
+    {"id": "M1", "type": "mirror", "gap_mm": 60, "radius_mm": 500, "turn_deg": 90, "diameter_mm": 25.4},
+    {"id": "W1", "type": "lens", "gap_mm": 30, "faces_mm": [null, null], "thicknesses_mm": [3], "materials": ["oil"]},
+    {"id": "A1", "type": "aperture", "gap_mm": 40, "diameter_mm": 10},
+    {"id": "S1", "type": "screen", "gap_mm": 50, "width_mm": 8},
+    {"id": "S2", "type": "screen", "gap_mm": 10},
+    {"id": "D1", "type": "dump", "gap_mm": 30}
+  ]
 }`
 
-// EveryField returns a valid bench that sets every field of the format: a source of the given
-// kind (every kind's default fields, see optics.DefaultSource) with a ray and a beam, user
-// materials of each model, and one element of each type in table order, with its default fields,
-// every optional field of its type filled and a mount. It panics if the tables make it invalid.
+// EveryField returns a valid bench that sets every field of the format, built from the tables: the
+// table, source, materials, rays and beam of EveryFieldJSON, the source of the given kind (a new
+// kind with its defaults, see optics.ChangeSourceKind), and one element of each type in table
+// order, with its default fields, every optional field of its type filled and a mount. It panics
+// if the tables make it invalid.
 func EveryField(sourceKind string) *optics.Bench {
-	b, err := optics.Decode([]byte(skeleton))
+	b, err := optics.Decode([]byte(EveryFieldJSON))
 	if err != nil {
 		panic(err)
 	}
+	b.Elements = []optics.Element{}
 	if sourceKind != b.Source.Kind {
 		b.Source = optics.ChangeSourceKind(b.Source, sourceKind)
 	}
