@@ -145,8 +145,13 @@ func TestKindTable(t *testing.T) {
 			t.Errorf("%s stops every ray but a path may not end on it", k.Type)
 		}
 	}
-	if got, want := quotedList(KindTypes()), `"lens", "thin-lens", "mirror", "aperture", "screen" or "dump"`; got != want {
-		t.Errorf("quotedList = %s, want %s", got, want)
+	for _, c := range []struct {
+		names []string
+		want  string
+	}{{[]string{"point"}, `"point"`}, {[]string{"collimated", "point"}, `"collimated" or "point"`}, {[]string{"a", "b", "c"}, `"a", "b" or "c"`}} {
+		if got := quotedList(c.names); got != c.want {
+			t.Errorf("quotedList(%q) = %s, want %s", c.names, got, c.want)
+		}
 	}
 	for _, k := range SourceKinds {
 		if k.Kind == "" || k.Noun == "" || k.Label == "" || k.Default == nil || k.check == nil {
