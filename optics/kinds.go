@@ -14,11 +14,14 @@ import (
 // drawings (web/diagram). A type's own validation rules (a lens's edge thickness, a mirror's turn)
 // are code too, reached through the entry.
 type Kind struct {
-	Type     string  // the element's "type" in the bench file
-	Noun     string  // what messages call one: "a thin lens needs focal_mm"
-	Label    string  // what people choose from: the form's list of types
-	IDPrefix string  // new elements are named IDPrefix1, IDPrefix2, ... (UniqueID)
-	Fields   []Field // its own fields besides ElementFields, in the order messages and forms list them
+	Type     string // the element's "type" in the bench file
+	Noun     string // what messages call one: "a thin lens needs focal_mm"
+	Label    string // what people choose from: the form's list of types
+	IDPrefix string // new elements are named IDPrefix1, IDPrefix2, ... (UniqueID)
+
+	// Fields are its own fields besides ElementFields, in the order messages and forms list them;
+	// a type takes a clear diameter when diameter_mm is among them.
+	Fields []Field
 
 	StopsRays bool      // rays end on it (with status ok): a beam dump
 	EndsPath  bool      // the beam may end on it: a bench whose last element is one is terminated
@@ -31,12 +34,6 @@ type Kind struct {
 	// check applies its own rules beyond presence and strays (nil: none). diameterOK says that
 	// diameter_mm is absent or a positive length, so that rules may use the clear aperture.
 	check func(v *checker, path string, e *Element, diameterOK bool)
-}
-
-// TakesDiameter reports whether elements of the kind have a clear diameter (diameter_mm).
-func (k *Kind) TakesDiameter() bool {
-	_, ok := FieldByKey(k.Fields, "diameter_mm")
-	return ok
 }
 
 // The fields of the element types. A clear diameter is shared by four of them.

@@ -1,8 +1,6 @@
 package layout
 
-import (
-	"raytable/optics"
-)
+import "raytable/optics"
 
 // DefaultMount is the footprint used for an element without a "mount" of its own: width across the
 // beam and depth along it (for a mirror: along its surface and along its normal), by its type's
