@@ -129,7 +129,7 @@ func (d *differ) value(path string, f Field, a, b reflect.Value) {
 	case float64:
 		d.num(path, x, b.Float())
 	case *float64:
-		d.optNum(path, x, b.Interface().(*float64), f.AbsentText())
+		d.optNum(path, x, b.Interface().(*float64), f.absentText())
 	case []float64:
 		d.nums(path, x, b.Interface().([]float64))
 	case []*float64:
@@ -137,7 +137,7 @@ func (d *differ) value(path string, f Field, a, b reflect.Value) {
 	case []string:
 		d.change(path, namesText(x), namesText(b.Interface().([]string)))
 	case *int:
-		d.change(path, countText(x, f.AbsentText()), countText(b.Interface().(*int), f.AbsentText()))
+		d.change(path, countText(x, f.absentText()), countText(b.Interface().(*int), f.absentText()))
 	case *Mount: // one line: a mount is read as its size
 		d.change(path, mountText(x), mountText(b.Interface().(*Mount)))
 	case *SellmeierSpec: // a material's models compare as their fields, an absent one as empty

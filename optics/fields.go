@@ -8,11 +8,11 @@ import (
 	"strings"
 )
 
-// Field is one key of an object in the bench file. The tables in this file (the fixed objects) and
-// in kinds.go (element types and source kinds) list every key of every object exactly once, and
-// everything that handles keys one by one is derived from them: the keys Decode allows and
-// requires and its messages, Validate's presence and stray-field checks, Diff, and the web form's
-// inputs and labels.
+// Field is one key of an object in the bench file. The tables in this file (the fixed objects), in
+// kinds.go (element types) and in source_kinds.go (source kinds) list every key of every object
+// once, and everything that handles keys one by one is derived from them: the keys Decode allows
+// and requires and its messages, Validate's presence and stray-field checks, Diff, and the web
+// form's inputs and labels.
 //
 // The table says what a key means; the struct field with the same JSON tag holds its value, and
 // its Go type is the field's shape: text (string), a number (float64), an optional number
@@ -36,18 +36,18 @@ type Field struct {
 	// a bench built in Go hears the same.
 	Required bool
 	About    string // for a required kind field: what it is, ending that message ("…, the radius of the ray bundle")
-	Hint     string // for a required optional number: a form says "is required; " + Hint when it is left empty
+	Hint     string // for a required kind field: a form left empty there says "is required; " + Hint at once
 
 	Selects   bool   // the field picks the object's kind: an element's type, a source's kind
 	Flat      bool   // null is accepted and means flat (a face or mirror radius); a form writes it "flat"
 	Absent    string // what an absent optional value means, as the history shows it: "none" unless set
 	Prose     bool   // free text: the history says only that it changed
-	Multiline bool   // text over several lines (a text area on a form)
+	Multiline bool   // text over several lines, or an object a form edits as its JSON: a text area
 }
 
-// AbsentText is how the history shows a field that is not given: "flat" for a radius, the default
+// absentText is how the history shows a field that is not given: "flat" for a radius, the default
 // for a field that has one, "none" otherwise.
-func (f Field) AbsentText() string {
+func (f Field) absentText() string {
 	switch {
 	case f.Absent != "":
 		return f.Absent

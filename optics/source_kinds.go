@@ -55,6 +55,15 @@ func SourceKindOrFirst(kind string) *SourceKind {
 	return &SourceKinds[0]
 }
 
+// SourceKindNames lists the source kinds in table order.
+func SourceKindNames() []string {
+	out := make([]string, len(SourceKinds))
+	for i, k := range SourceKinds {
+		out[i] = k.Kind
+	}
+	return out
+}
+
 // allSourceFields holds the common source fields and then every kind's, each key once.
 var allSourceFields = withKinds(SourceFields, SourceKinds, func(k SourceKind) []Field { return k.Fields })
 

@@ -185,7 +185,7 @@ func (v *checker) source() {
 		v.need("source", sv, k.Fields, k.Noun)
 		k.check(v)
 	} else {
-		v.add("source.kind", "must be %s, got %q", quotedList(sourceKindNames()), s.Kind)
+		v.add("source.kind", "must be %s, got %q", quotedList(SourceKindNames()), s.Kind)
 	}
 	if s.FanRays != nil && (*s.FanRays < 1 || *s.FanRays > MaxFanRays) {
 		v.add("source.fan_rays", "must be between 1 and %d rays, got %d", MaxFanRays, *s.FanRays)
@@ -258,14 +258,6 @@ func (v *checker) need(path string, obj reflect.Value, fields []Field, noun stri
 		}
 		v.add(field(path, f.Key), "a %s needs %s%s", noun, f.Key, about)
 	}
-}
-
-func sourceKindNames() []string {
-	out := make([]string, len(SourceKinds))
-	for i, k := range SourceKinds {
-		out[i] = k.Kind
-	}
-	return out
 }
 
 // fmtNum formats a number compactly: plain decimals without trailing zeros, exponent form only for

@@ -118,7 +118,7 @@ type Change struct {
 // an element type or a source kind replaced by another that exists), each count increased, and
 // each optional number or object removed. Element types and source kinds change through
 // optics.ChangeType and optics.ChangeSourceKind, as a builder changes them. The changes come in
-// document order; b itself is left as it was.
+// the order of the struct fields; b itself is left as it was.
 func Changes(b *optics.Bench) []Change {
 	c := &changer{orig: b}
 	c.walk("", reflect.ValueOf(b).Elem(), func(b *optics.Bench, use func(reflect.Value)) { use(reflect.ValueOf(b).Elem()) })
@@ -185,7 +185,7 @@ func (c *changer) selector(path string, f optics.Field, kind string, at place) {
 			case *optics.Element:
 				*o = optics.ChangeType(*o, other(optics.KindTypes(), kind))
 			case *optics.Source:
-				*o = optics.ChangeSourceKind(*o, other(sourceKinds(), kind))
+				*o = optics.ChangeSourceKind(*o, other(optics.SourceKindNames(), kind))
 			}
 		})
 	})
@@ -286,14 +286,6 @@ func other(names []string, name string) string {
 		}
 	}
 	panic("benchtest: no other name than " + name)
-}
-
-func sourceKinds() []string {
-	var out []string
-	for _, k := range optics.SourceKinds {
-		out = append(out, k.Kind)
-	}
-	return out
 }
 
 // scaled is a number changed a little: by 1 %, or to 0.5 from 0.
