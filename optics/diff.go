@@ -1,7 +1,10 @@
 package optics
 
 import (
+	"cmp"
 	"fmt"
+	"reflect"
+	"strconv"
 	"strings"
 )
 
@@ -23,6 +26,13 @@ import (
 // make every later one "moved". Lines come in a fixed order: format, title, notes, wavelengths,
 // table, source, materials, then removed, added, moved and changed elements. A nil bench is empty.
 // Diff does not require valid benches and never panics.
+//
+// Every field is compared, without a list of them here: the differ walks the two benches by
+// reflection, field by field in struct order, and shows each value by its Go type (a number, a
+// list, face radii, names, a mount's size, ...). The field tables (fields.go, kinds.go) say what an
+// absent value reads as ("none", "flat", "default" or the default value) and which text is prose
+// that the history only says changed. So a new field of a bench type is in the history as soon as
+// it is in its struct and table; a test changes every field alone and expects a line.
 func Diff(old, new *Bench) []string {
 	if old == nil {
 		old = &Bench{}
@@ -31,18 +41,7 @@ func Diff(old, new *Bench) []string {
 		new = &Bench{}
 	}
 	d := &differ{}
-	d.str("format", old.Format, new.Format)
-	if old.Title != new.Title {
-		d.line("title changed")
-	}
-	if old.Notes != new.Notes {
-		d.line("notes changed")
-	}
-	d.nums("wavelengths_nm", old.WavelengthsNM, new.WavelengthsNM)
-	d.table(&old.Table, &new.Table)
-	d.source(&old.Source, &new.Source)
-	d.materials(old.Materials, new.Materials)
-	d.elements(old.Elements, new.Elements)
+	d.object(dotted(""), reflect.ValueOf(old).Elem(), reflect.ValueOf(new).Elem(), "")
 	return d.lines
 }
 
@@ -98,48 +97,90 @@ func quoteIfOdd(s string) string {
 	return s
 }
 
-func (d *differ) table(a, b *Table) {
-	d.str("table.grid", a.Grid, b.Grid)
-	d.num("table.width_mm", a.WidthMM, b.WidthMM)
-	d.num("table.depth_mm", a.DepthMM, b.DepthMM)
-	d.num("table.beam_height_mm", a.BeamHeightMM, b.BeamHeightMM)
-	d.optNum("table.hole_offset_mm", a.HoleOffsetMM, b.HoleOffsetMM, "default")
+// dotted names the fields of an object at a JSON path: dotted("source")("na") is "source.na".
+func dotted(path string) func(string) string {
+	return func(key string) string { return field(path, key) }
 }
 
-func (d *differ) source(a, b *Source) {
-	d.num("source.x_mm", a.XMM, b.XMM)
-	d.num("source.y_mm", a.YMM, b.YMM)
-	d.num("source.heading_deg", a.HeadingDeg, b.HeadingDeg)
-	d.str("source.kind", a.Kind, b.Kind)
-	d.optNum("source.semi_diameter_mm", a.SemiDiameterMM, b.SemiDiameterMM, "none")
-	d.nums("source.field_angles_deg", a.FieldAnglesDeg, b.FieldAnglesDeg)
-	d.optNum("source.na", a.NA, b.NA, "none")
-	d.nums("source.object_heights_mm", a.ObjectHeightsMM, b.ObjectHeightsMM)
-	d.change("source.fan_rays", fmt.Sprint(a.FanRayCount()), fmt.Sprint(b.FanRayCount()))
-	for i := range max(len(a.Rays), len(b.Rays)) {
-		p := index("source.rays", i)
-		switch {
-		case i >= len(a.Rays):
-			d.line("added %s", p)
-		case i >= len(b.Rays):
-			d.line("removed %s", p)
-		default:
-			ra, rb := a.Rays[i], b.Rays[i]
-			d.num(field(p, "height_mm"), ra.HeightMM, rb.HeightMM)
-			d.num(field(p, "angle_deg"), ra.AngleDeg, rb.AngleDeg)
-			d.num(field(p, "x_mm"), ra.XMM, rb.XMM)
-			d.num(field(p, "x_angle_deg"), ra.XAngleDeg, rb.XAngleDeg)
+// object compares two structs of one type field by field, in struct order; name makes each
+// field's path, and skip is a key that is not compared (an element's id, by which it was matched).
+func (d *differ) object(name func(string) string, a, b reflect.Value, skip string) {
+	fields := fieldsOf(a.Type())
+	for i := range a.NumField() {
+		key := tagKey(a.Type().Field(i))
+		if key == skip {
+			continue
 		}
+		f, _ := FieldByKey(fields, key)
+		d.value(name(key), f, a.Field(i), b.Field(i))
 	}
+}
+
+// value compares one field's two values, by their Go type.
+func (d *differ) value(path string, f Field, a, b reflect.Value) {
+	switch x := a.Interface().(type) {
+	case string:
+		y := b.String()
+		if !f.Prose {
+			d.str(path, x, y)
+		} else if x != y {
+			d.line("%s changed", path)
+		}
+	case float64:
+		d.num(path, x, b.Float())
+	case *float64:
+		d.optNum(path, x, b.Interface().(*float64), f.absentText())
+	case []float64:
+		d.nums(path, x, b.Interface().([]float64))
+	case []*float64:
+		d.change(path, facesText(x), facesText(b.Interface().([]*float64)))
+	case []string:
+		d.change(path, namesText(x), namesText(b.Interface().([]string)))
+	case *int:
+		d.change(path, countText(x, f.absentText()), countText(b.Interface().(*int), f.absentText()))
+	case *Mount: // one line: a mount is read as its size
+		d.change(path, mountText(x), mountText(b.Interface().(*Mount)))
+	case *SellmeierSpec: // a material's models compare as their fields, an absent one as empty
+		y := b.Interface().(*SellmeierSpec)
+		d.object(dotted(path), reflect.ValueOf(cmp.Or(x, &SellmeierSpec{})).Elem(), reflect.ValueOf(cmp.Or(y, &SellmeierSpec{})).Elem(), "")
+	case map[string]MaterialSpec:
+		d.materials(x, b.Interface().(map[string]MaterialSpec))
+	case []Element:
+		d.elements(x, b.Interface().([]Element))
+	default:
+		d.nested(path, a, b)
+	}
+}
+
+// nested compares objects: a struct field by field, an optional one as added, removed or changed,
+// a list of them item by item. Anything else that differs is one "changed" line.
+func (d *differ) nested(path string, a, b reflect.Value) {
 	switch {
-	case a.Beam == nil && b.Beam != nil:
-		d.line("added source.beam")
-	case a.Beam != nil && b.Beam == nil:
-		d.line("removed source.beam")
-	case a.Beam != nil && b.Beam != nil:
-		d.num("source.beam.waist_radius_mm", a.Beam.WaistRadiusMM, b.Beam.WaistRadiusMM)
-		d.num("source.beam.waist_at_mm", a.Beam.WaistAtMM, b.Beam.WaistAtMM)
-		d.num("source.beam.m2", a.Beam.BeamQuality(), b.Beam.BeamQuality())
+	case a.Kind() == reflect.Struct:
+		d.object(dotted(path), a, b, "")
+	case a.Kind() == reflect.Pointer && a.Type().Elem().Kind() == reflect.Struct:
+		switch {
+		case a.IsNil() && !b.IsNil():
+			d.line("added %s", path)
+		case !a.IsNil() && b.IsNil():
+			d.line("removed %s", path)
+		case !a.IsNil():
+			d.object(dotted(path), a.Elem(), b.Elem(), "")
+		}
+	case a.Kind() == reflect.Slice && a.Type().Elem().Kind() == reflect.Struct:
+		for i := range max(a.Len(), b.Len()) {
+			p := index(path, i)
+			switch {
+			case i >= a.Len():
+				d.line("added %s", p)
+			case i >= b.Len():
+				d.line("removed %s", p)
+			default:
+				d.object(dotted(p), a.Index(i), b.Index(i), "")
+			}
+		}
+	case !reflect.DeepEqual(a.Interface(), b.Interface()):
+		d.line("%s changed", path)
 	}
 }
 
@@ -159,20 +200,7 @@ func (d *differ) materials(a, b map[string]MaterialSpec) {
 		case !inB:
 			d.line("removed material %s", quoteIfOdd(name))
 		default:
-			p := materialPath(name)
-			var ab, ac, bb, bc []float64
-			if ma.Sellmeier != nil {
-				ab, ac = ma.Sellmeier.B, ma.Sellmeier.CUM2
-			}
-			if mb.Sellmeier != nil {
-				bb, bc = mb.Sellmeier.B, mb.Sellmeier.CUM2
-			}
-			d.nums(field(p, "sellmeier.b"), ab, bb)
-			d.nums(field(p, "sellmeier.c_um2"), ac, bc)
-			d.nums(field(p, "range_nm"), ma.RangeNM, mb.RangeNM)
-			d.optNum(field(p, "nd"), ma.ND, mb.ND, "none")
-			d.optNum(field(p, "vd"), ma.VD, mb.VD, "none")
-			d.optNum(field(p, "index"), ma.Index, mb.Index, "none")
+			d.object(dotted(materialPath(name)), reflect.ValueOf(ma), reflect.ValueOf(mb), "")
 		}
 	}
 }
@@ -268,18 +296,7 @@ func lcs(a, b []string) map[string]bool {
 
 // element lists the field changes of one kept element, prefixed by its id.
 func (d *differ) element(id string, a, b *Element) {
-	p := func(key string) string { return id + " " + key }
-	d.str(p("type"), a.Type, b.Type)
-	d.num(p("gap_mm"), a.GapMM, b.GapMM)
-	d.change(p("faces_mm"), facesText(a.FacesMM), facesText(b.FacesMM))
-	d.nums(p("thicknesses_mm"), a.ThicknessesMM, b.ThicknessesMM)
-	d.change(p("materials"), namesText(a.Materials), namesText(b.Materials))
-	d.optNum(p("focal_mm"), a.FocalMM, b.FocalMM, "none")
-	d.optNum(p("radius_mm"), a.RadiusMM, b.RadiusMM, "flat")
-	d.optNum(p("turn_deg"), a.TurnDeg, b.TurnDeg, "none")
-	d.optNum(p("diameter_mm"), a.DiameterMM, b.DiameterMM, "none")
-	d.optNum(p("width_mm"), a.WidthMM, b.WidthMM, "none")
-	d.change(p("mount"), mountText(a.Mount), mountText(b.Mount))
+	d.object(func(key string) string { return id + " " + key }, reflect.ValueOf(a).Elem(), reflect.ValueOf(b).Elem(), "id")
 }
 
 func facesText(faces []*float64) string {
@@ -302,6 +319,13 @@ func namesText(names []string) string {
 		parts[i] = quoteIfOdd(n)
 	}
 	return strings.Join(parts, ", ")
+}
+
+func countText(n *int, none string) string {
+	if n == nil {
+		return none
+	}
+	return strconv.Itoa(*n)
 }
 
 func mountText(m *Mount) string {

@@ -122,7 +122,9 @@ func BuildPath(b *Bench) *Path {
 			if e.Type == TypeScreen {
 				s.SemiAperture = inf
 			}
-			s.Stops = e.Type == TypeDump
+			if k, ok := KindOf(e.Type); ok {
+				s.Stops = k.StopsRays
+			}
 			p.Surfaces = append(p.Surfaces, s)
 		}
 		p.Spans[ei] = Span{First: first, Last: len(p.Surfaces) - 1}

@@ -3,6 +3,7 @@ package optics
 import (
 	"math"
 	"raytable/optics/numfmt"
+	"reflect"
 	"slices"
 	"strings"
 	"unicode"
@@ -35,8 +36,9 @@ func Validate(b *Bench) error {
 // checker collects problems for Validate.
 type checker struct {
 	reader
-	b         *Bench
-	userMedia map[string]material.Medium // user materials without problems, built once
+	b            *Bench
+	userMedia    map[string]material.Medium // user materials without problems, built once
+	checkedMedia map[string]bool             // lens media already checked, so that each is reported once
 }
 
 func validationProblems(b *Bench) []Problem {
@@ -44,7 +46,7 @@ func validationProblems(b *Bench) []Problem {
 	if b == nil {
 		return []Problem{{Message: "no bench given"}}
 	}
-	v := &checker{b: b, userMedia: map[string]material.Medium{}}
+	v := &checker{b: b, userMedia: map[string]material.Medium{}, checkedMedia: map[string]bool{}}
 	if b.Format != FormatBenchV1 {
 		v.add("format", "must be %q, got %q", FormatBenchV1, b.Format)
 	}
@@ -179,35 +181,13 @@ func (v *checker) source() {
 	if v.finite("source.heading_deg", s.HeadingDeg) && math.Abs(s.HeadingDeg) > MaxHeadingDeg {
 		v.add("source.heading_deg", "%s° is out of range: use a heading between -360° and 360°", fmtNum(s.HeadingDeg))
 	}
-	present := map[string]bool{
-		"semi_diameter_mm":  s.SemiDiameterMM != nil,
-		"field_angles_deg":  s.FieldAnglesDeg != nil,
-		"na":                s.NA != nil,
-		"object_heights_mm": s.ObjectHeightsMM != nil,
-	}
-	switch s.Kind {
-	case SourceCollimated:
-		v.stray("source", present, kindKeys[SourceCollimated], " for a collimated source")
-		if s.SemiDiameterMM == nil {
-			v.add("source.semi_diameter_mm", "a collimated source needs semi_diameter_mm, the radius of the ray bundle")
-		} else {
-			v.positive("source.semi_diameter_mm", *s.SemiDiameterMM)
-		}
-		for i, a := range s.FieldAnglesDeg {
-			v.angle(index("source.field_angles_deg", i), a)
-		}
-	case SourcePoint:
-		v.stray("source", present, kindKeys[SourcePoint], " for a point source")
-		if s.NA == nil {
-			v.add("source.na", "a point source needs na, the numerical aperture of the traced cone")
-		} else if v.finite("source.na", *s.NA) && (*s.NA <= 0 || *s.NA >= 1) {
-			v.add("source.na", "numerical aperture %s must lie strictly between 0 and 1", fmtNum(*s.NA))
-		}
-		for i, h := range s.ObjectHeightsMM {
-			v.length(index("source.object_heights_mm", i), h)
-		}
-	default:
-		v.add("source.kind", "must be %q or %q, got %q", SourceCollimated, SourcePoint, s.Kind)
+	if k, known := SourceKindOf(s.Kind); known {
+		sv := reflect.ValueOf(s).Elem()
+		v.stray("source", sv, sourceKindFields, keys(k.Fields), " for a "+k.Noun)
+		v.need("source", sv, k.Fields, k.Noun)
+		k.check(v)
+	} else {
+		v.add("source.kind", "must be %s, got %q", quotedList(SourceKindNames()), s.Kind)
 	}
 	if s.FanRays != nil && (*s.FanRays < 1 || *s.FanRays > MaxFanRays) {
 		v.add("source.fan_rays", "must be between 1 and %d rays, got %d", MaxFanRays, *s.FanRays)
@@ -230,13 +210,55 @@ func (v *checker) source() {
 	}
 }
 
-// stray reports fields that are set but belong to another element type or source kind.
-func (v *checker) stray(path string, present map[string]bool, allowed []string, why string) {
-	keys := sortedKeys(present)
-	for _, k := range keys {
-		if present[k] && !slices.Contains(allowed, k) {
+// collimated checks the fields of a collimated source.
+func (v *checker) collimated() {
+	s := &v.b.Source
+	if s.SemiDiameterMM != nil {
+		v.positive("source.semi_diameter_mm", *s.SemiDiameterMM)
+	}
+	for i, a := range s.FieldAnglesDeg {
+		v.angle(index("source.field_angles_deg", i), a)
+	}
+}
+
+// pointSource checks the fields of a point source.
+func (v *checker) pointSource() {
+	s := &v.b.Source
+	if s.NA != nil && v.finite("source.na", *s.NA) && (*s.NA <= 0 || *s.NA >= 1) {
+		v.add("source.na", "numerical aperture %s must lie strictly between 0 and 1", fmtNum(*s.NA))
+	}
+	for i, h := range s.ObjectHeightsMM {
+		v.length(index("source.object_heights_mm", i), h)
+	}
+}
+
+// stray reports the fields of obj (a struct value) among kindFields that are set but not among
+// allowed: fields that belong to another element type or source kind. They are reported in the
+// order of their keys.
+func (v *checker) stray(path string, obj reflect.Value, kindFields []Field, allowed []string, why string) {
+	set := map[string]bool{}
+	for _, f := range kindFields {
+		set[f.Key] = !f.value(obj).IsZero()
+	}
+	for _, k := range sortedKeys(set) {
+		if set[k] && !slices.Contains(allowed, k) {
 			v.add(field(path, k), "unknown field%s (allowed: %s)", why, strings.Join(allowed, ", "))
 		}
+	}
+}
+
+// need reports the required fields among fields that obj (a struct value) lacks, naming the kind:
+// "a thin lens needs focal_mm".
+func (v *checker) need(path string, obj reflect.Value, fields []Field, noun string) {
+	for _, f := range fields {
+		if !f.Required || !f.value(obj).IsZero() {
+			continue
+		}
+		about := ""
+		if f.About != "" {
+			about = ", " + f.About
+		}
+		v.add(field(path, f.Key), "a %s needs %s%s", noun, f.Key, about)
 	}
 }
 

@@ -2,6 +2,7 @@ package optics
 
 import (
 	"math"
+	"reflect"
 	"strings"
 	"unicode/utf8"
 )
@@ -12,7 +13,6 @@ func (v *checker) elements() {
 		v.add("elements", "has %d elements; at most %d are allowed", len(els), MaxElements)
 	}
 	firstUse := map[string]int{}
-	checkedMedia := map[string]bool{}
 	for i := range els {
 		e := &els[i]
 		p := index("elements", i)
@@ -25,39 +25,18 @@ func (v *checker) elements() {
 			v.positive(field(p, "mount.width_mm"), e.Mount.WidthMM)
 			v.positive(field(p, "mount.depth_mm"), e.Mount.DepthMM)
 		}
-		allowed, known := typeKeys[e.Type]
+		k, known := KindOf(e.Type)
 		if !known {
-			v.add(field(p, "type"), "unknown element type %q: use one of %s", e.Type, strings.Join(elementTypes, ", "))
+			v.add(field(p, "type"), "unknown element type %q: use one of %s", e.Type, strings.Join(KindTypes(), ", "))
 			continue
 		}
-		v.stray(p, map[string]bool{
-			"faces_mm":       e.FacesMM != nil,
-			"thicknesses_mm": e.ThicknessesMM != nil,
-			"materials":      e.Materials != nil,
-			"focal_mm":       e.FocalMM != nil,
-			"radius_mm":      e.RadiusMM != nil,
-			"turn_deg":       e.TurnDeg != nil,
-			"diameter_mm":    e.DiameterMM != nil,
-			"width_mm":       e.WidthMM != nil,
-		}, append(append([]string{}, elementKeys...), allowed...), " for type "+e.Type)
+		ev := reflect.ValueOf(e).Elem()
+		v.stray(p, ev, elementKindFields, append(keys(ElementFields), keys(k.Fields)...), " for type "+e.Type)
+		// Checked on every type, so that a stray diameter also hears when it is not positive.
 		diameterOK := e.DiameterMM == nil || v.positive(field(p, "diameter_mm"), *e.DiameterMM)
-		switch e.Type {
-		case TypeLens:
-			v.lens(p, e, diameterOK, checkedMedia)
-		case TypeThinLens:
-			fp := field(p, "focal_mm")
-			switch {
-			case e.FocalMM == nil:
-				v.add(fp, "a thin lens needs focal_mm")
-			case v.length(fp, *e.FocalMM) && *e.FocalMM == 0:
-				v.add(fp, "focal length must not be 0 mm")
-			}
-		case TypeMirror:
-			v.mirror(p, e, diameterOK)
-		case TypeScreen:
-			if e.WidthMM != nil {
-				v.positive(field(p, "width_mm"), *e.WidthMM)
-			}
+		v.need(p, ev, k.Fields, k.Noun)
+		if k.check != nil {
+			k.check(v, p, e, diameterOK)
 		}
 	}
 }
@@ -81,7 +60,7 @@ func (v *checker) elementID(p, id string, i int, firstUse map[string]int) {
 	firstUse[id] = i
 }
 
-func (v *checker) lens(p string, e *Element, diameterOK bool, checkedMedia map[string]bool) {
+func (v *checker) lens(p string, e *Element, diameterOK bool) {
 	k := len(e.FacesMM)
 	if k < 2 {
 		v.add(field(p, "faces_mm"), "a lens needs at least 2 faces, got %d", k)
@@ -116,7 +95,7 @@ func (v *checker) lens(p string, e *Element, diameterOK bool, checkedMedia map[s
 		}
 	}
 	for i, name := range e.Materials {
-		v.lensMaterial(index(field(p, "materials"), i), name, checkedMedia)
+		v.lensMaterial(index(field(p, "materials"), i), name, v.checkedMedia)
 	}
 }
 
@@ -182,11 +161,17 @@ func sag(r *float64, h float64) float64 {
 	return h * h / (R + math.Copysign(math.Sqrt(max(R*R-h*h, 0)), R))
 }
 
+// thinLens checks a thin lens's focal length.
+func (v *checker) thinLens(p string, e *Element, _ bool) {
+	if fp := field(p, "focal_mm"); e.FocalMM != nil && v.length(fp, *e.FocalMM) && *e.FocalMM == 0 {
+		v.add(fp, "focal length must not be 0 mm")
+	}
+}
+
+// mirror checks a mirror's turn and radius.
 func (v *checker) mirror(p string, e *Element, diameterOK bool) {
 	tp := field(p, "turn_deg")
-	if e.TurnDeg == nil {
-		v.add(tp, "a mirror needs turn_deg, how far it turns the beam on the table")
-	} else if v.finite(tp, *e.TurnDeg) {
+	if e.TurnDeg != nil && v.finite(tp, *e.TurnDeg) {
 		if t := math.Abs(*e.TurnDeg); t == 0 || t > 180 {
 			v.add(tp, "turn %s° must have a magnitude above 0° and at most 180°", fmtNum(*e.TurnDeg))
 		}
@@ -196,4 +181,11 @@ func (v *checker) mirror(p string, e *Element, diameterOK bool) {
 		semi = *e.DiameterMM / 2
 	}
 	v.radius(field(p, "radius_mm"), e.RadiusMM, semi, "mirror")
+}
+
+// screen checks a screen's width.
+func (v *checker) screen(p string, e *Element, _ bool) {
+	if e.WidthMM != nil {
+		v.positive(field(p, "width_mm"), *e.WidthMM)
+	}
 }

@@ -4,6 +4,7 @@ import (
 	"encoding/json"
 	"fmt"
 	"net/url"
+	"slices"
 	"strconv"
 	"strings"
 
@@ -14,83 +15,96 @@ import (
 // benchValues writes a bench into form values, keyed by JSON path, the way formReader reads them.
 func benchValues(b *optics.Bench) map[string]string {
 	v := map[string]string{
-		"title":                    b.Title,
-		"notes":                    b.Notes,
-		"wavelengths_nm":           numList(b.WavelengthsNM),
-		"table.grid":               b.Table.Grid,
-		"table.width_mm":           formatNumber(b.Table.WidthMM),
-		"table.depth_mm":           formatNumber(b.Table.DepthMM),
-		"table.beam_height_mm":     formatNumber(b.Table.BeamHeightMM),
-		"table.hole_offset_mm":     optText(b.Table.HoleOffsetMM),
-		"source.x_mm":              formatNumber(b.Source.XMM),
-		"source.y_mm":              formatNumber(b.Source.YMM),
-		"source.heading_deg":       formatNumber(b.Source.HeadingDeg),
-		"source.kind":              b.Source.Kind,
-		"source._kind_shown":       b.Source.Kind,
-		"source.semi_diameter_mm":  optText(b.Source.SemiDiameterMM),
-		"source.field_angles_deg":  numList(b.Source.FieldAnglesDeg),
-		"source.na":                optText(b.Source.NA),
-		"source.object_heights_mm": numList(b.Source.ObjectHeightsMM),
+		"title":          b.Title,
+		"notes":          b.Notes,
+		"wavelengths_nm": numList(b.WavelengthsNM),
 	}
-	if b.Source.FanRays != nil {
-		v["source.fan_rays"] = strconv.Itoa(*b.Source.FanRays)
-	}
-	if bm := b.Source.Beam; bm != nil {
-		v["source.beam.waist_radius_mm"] = formatNumber(bm.WaistRadiusMM)
-		v["source.beam.waist_at_mm"] = formatNumber(bm.WaistAtMM)
-		v["source.beam.m2"] = optText(bm.M2)
-	}
-	for i, r := range b.Source.Rays {
-		p := fmt.Sprintf("source.rays[%d].", i)
-		v[p+"height_mm"] = formatNumber(r.HeightMM)
-		v[p+"angle_deg"] = formatNumber(r.AngleDeg)
-		v[p+"x_mm"] = formatNumber(r.XMM)
-		v[p+"x_angle_deg"] = formatNumber(r.XAngleDeg)
-	}
+	putFields(v, "table.", optics.TableFields, &b.Table)
+	putFields(v, "source.", optics.SourceFields, &b.Source)
+	putFields(v, "source.", optics.SourceKindOrFirst(b.Source.Kind).Fields, &b.Source)
 	if len(b.Materials) > 0 {
 		if data, err := json.MarshalIndent(b.Materials, "", "  "); err == nil {
 			v["materials"] = string(data)
 		}
 	}
-	for i, e := range b.Elements {
+	for i := range b.Elements {
+		e := &b.Elements[i]
 		p := fmt.Sprintf("elements[%d].", i)
-		v[p+"id"] = e.ID
-		v[p+"type"] = e.Type
-		v[p+"_type_shown"] = e.Type
-		v[p+"gap_mm"] = formatNumber(e.GapMM)
-		v[p+"faces_mm"] = facesText(e.FacesMM)
-		v[p+"thicknesses_mm"] = numList(e.ThicknessesMM)
-		v[p+"materials"] = strings.Join(e.Materials, ", ")
-		v[p+"focal_mm"] = optText(e.FocalMM)
-		if e.Type == optics.TypeMirror {
-			v[p+"radius_mm"] = optTextOr(e.RadiusMM, "flat")
-		}
-		v[p+"turn_deg"] = optText(e.TurnDeg)
-		v[p+"diameter_mm"] = optText(e.DiameterMM)
-		v[p+"width_mm"] = optText(e.WidthMM)
-		if e.Mount != nil {
-			v[p+"mount.width_mm"] = formatNumber(e.Mount.WidthMM)
-			v[p+"mount.depth_mm"] = formatNumber(e.Mount.DepthMM)
+		putFields(v, p, optics.ElementFields, e)
+		if k, ok := optics.KindOf(e.Type); ok {
+			putFields(v, p, k.Fields, e)
 		}
 	}
 	return v
 }
 
+// putFields writes the fields of obj, a pointer to the struct they belong to, as form texts under
+// prefix, each by the Go type of its value; a nested object's fields go under its own key. A
+// selector (an element's type, a source's kind) is written twice: the second copy, a hidden
+// input, tells the reader which kind the form showed.
+func putFields(v map[string]string, prefix string, fields []optics.Field, obj any) {
+	for _, fl := range fields {
+		path := prefix + fl.Key
+		switch x := fl.In(obj).(type) {
+		case *string:
+			v[path] = *x
+			if fl.Selects {
+				v[shownName(prefix, fl)] = *x
+			}
+		case *float64:
+			v[path] = optics.FormatNumber(*x)
+		case **float64:
+			v[path] = optTextOr(*x, flatWord(fl))
+		case *[]float64:
+			v[path] = numList(*x)
+		case *[]*float64:
+			v[path] = facesText(*x)
+		case *[]string:
+			v[path] = strings.Join(*x, ", ")
+		case **int:
+			if *x != nil {
+				v[path] = strconv.Itoa(**x)
+			}
+		case **optics.Beam:
+			if *x != nil {
+				putFields(v, path+".", fl.Fields, *x)
+			}
+		case **optics.Mount:
+			if *x != nil {
+				putFields(v, path+".", fl.Fields, *x)
+			}
+		case *[]optics.ExplicitRay:
+			for i := range *x {
+				putFields(v, fmt.Sprintf("%s[%d].", path, i), fl.Fields, &(*x)[i])
+			}
+		}
+	}
+}
+
+// shownName is the hidden input that repeats a selector as the form showed it: source._kind_shown.
+func shownName(prefix string, fl optics.Field) string { return prefix + "_" + fl.Key + "_shown" }
+
+// flatWord is what an empty optional number reads as on the form: "flat" for a radius, else nothing.
+func flatWord(fl optics.Field) string {
+	if fl.Flat {
+		return "flat"
+	}
+	return ""
+}
+
 func numList(xs []float64) string {
 	parts := make([]string, len(xs))
 	for i, x := range xs {
-		parts[i] = formatNumber(x)
+		parts[i] = optics.FormatNumber(x)
 	}
 	return strings.Join(parts, ", ")
 }
-
-func optText(x *float64) string { return optTextOr(x, "") }
 
 func optTextOr(x *float64, none string) string {
 	if x == nil {
 		return none
 	}
-	return formatNumber(*x)
+	return optics.FormatNumber(*x)
 }
 
 func facesText(faces []*float64) string {
@@ -139,13 +153,9 @@ func buildForm(id string, b *optics.Bench, values map[string]string, problems []
 	f.Table = fb.group("Table", "table", "table", tableFields())
 	f.Source = fb.group("Source", "source", "source", sourceFields(b.Source.Kind))
 	f.Beam = fb.group("Laser beam (leave empty for none)", "beam", "source.beam", beamFields())
-	f.Materials = fb.group("Your own materials", "materials", "materials", []spec{{"materials", "materials (JSON, as in the bench file)", "", "textarea"}})
+	f.Materials = fb.group("Your own materials", "materials", "materials", specs("", materialsLayout))
 	for i := range b.Source.Rays {
-		p := fmt.Sprintf("source.rays[%d].", i)
-		f.Rays = append(f.Rays, view.RayForm{Index: i, Fields: fb.fields([]spec{
-			{p + "height_mm", "height", "mm", ""}, {p + "angle_deg", "angle", "°", ""},
-			{p + "x_mm", "vertical height", "mm", ""}, {p + "x_angle_deg", "vertical angle", "°", ""},
-		})})
+		f.Rays = append(f.Rays, view.RayForm{Index: i, Fields: fb.fields(rayFields(i))})
 	}
 	f.RayErrors = fb.take("source.rays")
 	f.AddAt = append(f.AddAt, view.Option{Value: "0", Label: "at the start"})
@@ -247,8 +257,7 @@ func (fb *formBuilder) fields(specs []spec) []view.Field {
 		case strings.HasSuffix(s.name, ".type"):
 			f.Kind, f.Options, f.Apply = "select", typeOptions(), true
 		case s.name == "source.kind":
-			f.Kind, f.Apply = "select", true
-			f.Options = []view.Option{{Value: optics.SourceCollimated, Label: "collimated bundle"}, {Value: optics.SourcePoint, Label: "point source"}}
+			f.Kind, f.Options, f.Apply = "select", sourceKindOptions(), true
 		case s.name == "table.grid":
 			f.Kind = "select"
 			f.Options = []view.Option{{Value: optics.GridMetric25, Label: "metric, 25 mm holes"}, {Value: optics.GridImperial1, Label: "imperial, 1 in holes"}, {Value: optics.GridNone, Label: "no grid"}}
@@ -258,110 +267,114 @@ func (fb *formBuilder) fields(specs []spec) []view.Field {
 	return out
 }
 
+// typeOptions is the list of element types, as the add menu and each type input offer them.
 func typeOptions() []view.Option {
-	labels := map[string]string{
-		optics.TypeLens: "lens", optics.TypeThinLens: "thin lens", optics.TypeMirror: "mirror",
-		optics.TypeAperture: "aperture (iris, pinhole)", optics.TypeScreen: "screen (camera, card)", optics.TypeDump: "beam dump",
-	}
-	out := make([]view.Option, len(elementTypes))
-	for i, t := range elementTypes {
-		out[i] = view.Option{Value: t, Label: labels[t]}
+	out := make([]view.Option, len(optics.Kinds))
+	for i, k := range optics.Kinds {
+		out[i] = view.Option{Value: k.Type, Label: k.Label}
 	}
 	return out
 }
 
-func generalFields() []spec {
-	return []spec{
-		{"title", "title", "", ""},
-		{"wavelengths_nm", "wavelengths (first is primary, comma list)", "nm", ""},
-		{"notes", "notes", "", "textarea"},
+func sourceKindOptions() []view.Option {
+	out := make([]view.Option, len(optics.SourceKinds))
+	for i, k := range optics.SourceKinds {
+		out[i] = view.Option{Value: k.Kind, Label: k.Label}
 	}
+	return out
 }
 
-func tableFields() []spec {
-	return []spec{
-		{"table.grid", "hole grid", "", ""},
-		{"table.width_mm", "width", "mm", ""},
-		{"table.depth_mm", "depth", "mm", ""},
-		{"table.beam_height_mm", "beam height", "mm", ""},
-		{"table.hole_offset_mm", "first hole from the edges (empty: by grid)", "mm", ""},
+// The groups whose inputs the page lays out in an order of its own; the others follow their table.
+var (
+	generalLayout   = pick(optics.BenchFields, "title", "wavelengths_nm", "notes")
+	materialsLayout = pick(optics.BenchFields, "materials")
+	sourceHead      = pick(optics.SourceFields, "kind", "x_mm", "y_mm", "heading_deg") // then the kind's own
+	sourceTail      = pick(optics.SourceFields, "fan_rays")
+)
+
+// pick returns the table entries of keys, in that order. A key without an entry is a programmer's
+// slip, caught as the package starts.
+func pick(fields []optics.Field, keys ...string) []optics.Field {
+	out := make([]optics.Field, len(keys))
+	for i, k := range keys {
+		f, ok := optics.FieldByKey(fields, k)
+		if !ok {
+			panic("server: no field " + k + " in the table")
+		}
+		out[i] = f
 	}
+	return out
 }
 
+// specs lays out fields as inputs named by their JSON paths under prefix, label and unit from the
+// table, a selector followed by its hidden copy. A nested object's fields are laid out by the
+// caller, unless the object is edited as one text (materials, as JSON).
+func specs(prefix string, fields []optics.Field) []spec {
+	var out []spec
+	for _, fl := range fields {
+		if fl.Fields != nil && !fl.Multiline {
+			continue
+		}
+		s := spec{name: prefix + fl.Key, label: fl.Label}
+		if fl.Quantity != nil {
+			s.unit = fl.Quantity.Unit
+		}
+		if fl.Multiline {
+			s.kind = "textarea"
+		}
+		out = append(out, s)
+		if fl.Selects {
+			out = append(out, spec{name: shownName(prefix, fl), kind: "hidden"})
+		}
+	}
+	return out
+}
+
+func generalFields() []spec { return specs("", generalLayout) }
+
+func tableFields() []spec { return specs("table.", optics.TableFields) }
+
+// sourceFields lays out the source: its kind first, then where it stands, its kind's own fields
+// (the first kind's for a kind that is not known) and the fan size. Rays and beam are groups of
+// their own.
 func sourceFields(kind string) []spec {
-	s := []spec{
-		{"source.kind", "kind", "", ""},
-		{"source._kind_shown", "", "", "hidden"},
-		{"source.x_mm", "x on the table", "mm", ""},
-		{"source.y_mm", "y on the table", "mm", ""},
-		{"source.heading_deg", "heading", "°", ""},
-	}
-	switch kind {
-	case optics.SourcePoint:
-		s = append(s, spec{"source.na", "numerical aperture", "", ""}, spec{"source.object_heights_mm", "object heights (comma list)", "mm", ""})
-	default:
-		s = append(s, spec{"source.semi_diameter_mm", "bundle radius", "mm", ""}, spec{"source.field_angles_deg", "field angles (comma list)", "°", ""})
-	}
-	return append(s, spec{"source.fan_rays", "rays per fan (empty: 21)", "", ""})
+	return slices.Concat(specs("source.", sourceHead), specs("source.", optics.SourceKindOrFirst(kind).Fields), specs("source.", sourceTail))
 }
 
-func beamFields() []spec {
-	return []spec{
-		{"source.beam.waist_radius_mm", "waist radius (1/e²)", "mm", ""},
-		{"source.beam.waist_at_mm", "waist position from the source", "mm", ""},
-		{"source.beam.m2", "M² (empty: 1)", "", ""},
-	}
-}
+func beamFields() []spec { return specs("source.beam.", optics.BeamFields) }
 
+func rayFields(i int) []spec { return specs(fmt.Sprintf("source.rays[%d].", i), optics.RayFields) }
+
+// elementFields lays out element i of a type: its common fields, the type's own, then the mount's.
 func elementFields(i int, typ string) []spec {
 	p := fmt.Sprintf("elements[%d].", i)
-	s := []spec{
-		{p + "id", "id", "", ""},
-		{p + "type", "type", "", ""},
-		{p + "_type_shown", "", "", "hidden"},
-		{p + "gap_mm", "gap from the previous element", "mm", ""},
+	s := specs(p, optics.ElementFields)
+	if k, ok := optics.KindOf(typ); ok {
+		s = append(s, specs(p, k.Fields)...)
 	}
-	switch typ {
-	case optics.TypeLens:
-		s = append(s,
-			spec{p + "faces_mm", "face radii (comma list, flat for flat)", "mm", ""},
-			spec{p + "thicknesses_mm", "thicknesses (comma list)", "mm", ""},
-			spec{p + "materials", "materials (comma list)", "", ""},
-			spec{p + "diameter_mm", "clear diameter (empty: unlimited)", "mm", ""})
-	case optics.TypeThinLens:
-		s = append(s, spec{p + "focal_mm", "focal length", "mm", ""}, spec{p + "diameter_mm", "clear diameter (empty: unlimited)", "mm", ""})
-	case optics.TypeMirror:
-		s = append(s,
-			spec{p + "radius_mm", "radius (+ concave, flat)", "mm", ""},
-			spec{p + "turn_deg", "turn (+ counter-clockwise)", "°", ""},
-			spec{p + "diameter_mm", "clear diameter (empty: unlimited)", "mm", ""})
-	case optics.TypeAperture:
-		s = append(s, spec{p + "diameter_mm", "clear diameter", "mm", ""})
-	case optics.TypeScreen:
-		s = append(s, spec{p + "width_mm", "width (empty: unlimited)", "mm", ""})
+	for _, fl := range optics.ElementFields {
+		if fl.Fields != nil {
+			s = append(s, specs(p+fl.Key+".", fl.Fields)...)
+		}
 	}
-	return append(s,
-		spec{p + "mount.width_mm", "mount width (empty: by type)", "mm", ""},
-		spec{p + "mount.depth_mm", "mount depth", "mm", ""})
+	return s
 }
 
 // fieldNames lists every input name the form for b has.
 func fieldNames(b *optics.Bench) map[string]bool {
-	names := map[string]bool{"materials": true}
+	names := map[string]bool{}
 	add := func(specs []spec) {
 		for _, s := range specs {
 			names[s.name] = true
 		}
 	}
 	add(generalFields())
+	add(specs("", materialsLayout))
 	add(tableFields())
 	add(sourceFields(b.Source.Kind))
 	add(beamFields())
 	for i := range b.Source.Rays {
-		p := fmt.Sprintf("source.rays[%d].", i)
-		for _, n := range []string{"height_mm", "angle_deg", "x_mm", "x_angle_deg"} {
-			names[p+n] = true
-		}
+		add(rayFields(i))
 	}
 	for i, e := range b.Elements {
 		add(elementFields(i, e.Type))

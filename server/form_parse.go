@@ -42,13 +42,13 @@ func (f *formReader) get(path string) string {
 func (f *formReader) text(path string) string { return strings.TrimSpace(f.get(path)) }
 
 // num reads a required number.
-func (f *formReader) num(path string, q quantity) float64 {
+func (f *formReader) num(path string, q *optics.Quantity) float64 {
 	s := f.text(path)
 	if s == "" {
-		f.add(path, "is required; %s", q.hint)
+		f.add(path, "is required; %s", q.Hint)
 		return 0
 	}
-	v, err := q.parse(s)
+	v, err := q.Parse(s)
 	if err != nil {
 		f.add(path, "%s", err)
 	}
@@ -56,12 +56,12 @@ func (f *formReader) num(path string, q quantity) float64 {
 }
 
 // optNum reads an optional number; an empty field is nil.
-func (f *formReader) optNum(path string, q quantity) *float64 {
+func (f *formReader) optNum(path string, q *optics.Quantity) *float64 {
 	s := f.text(path)
 	if s == "" {
 		return nil
 	}
-	v, err := q.parse(s)
+	v, err := q.Parse(s)
 	if err != nil {
 		f.add(path, "%s", err)
 		return nil
@@ -82,14 +82,14 @@ func splitList(s string) []string {
 }
 
 // list reads a comma list of numbers; the problem of item i is at path[i].
-func (f *formReader) list(path string, q quantity) []float64 {
+func (f *formReader) list(path string, q *optics.Quantity) []float64 {
 	items := splitList(f.get(path))
 	if items == nil {
 		return nil
 	}
 	out := make([]float64, len(items))
 	for i, s := range items {
-		v, err := q.parse(s)
+		v, err := q.Parse(s)
 		if err != nil {
 			f.add(fmt.Sprintf("%s[%d]", path, i), "%s", err)
 		}
@@ -111,7 +111,7 @@ func (f *formReader) faces(path string) []*float64 {
 		if s == "" || strings.EqualFold(s, "flat") {
 			continue
 		}
-		v, err := length.parse(s)
+		v, err := optics.Length.Parse(s)
 		if err != nil {
 			f.add(fmt.Sprintf("%s[%d]", path, i), "%s, or flat", err)
 			continue
@@ -121,13 +121,13 @@ func (f *formReader) faces(path string) []*float64 {
 	return out
 }
 
-// radius reads a mirror radius: a length, or "flat" or nothing.
-func (f *formReader) radius(path string) *float64 {
+// radius reads a mirror radius: a number, or "flat" or nothing.
+func (f *formReader) radius(path string, q *optics.Quantity) *float64 {
 	s := f.text(path)
 	if s == "" || strings.EqualFold(s, "flat") {
 		return nil
 	}
-	return f.optNum(path, length)
+	return f.optNum(path, q)
 }
 
 // count reads an optional whole number.
@@ -152,15 +152,9 @@ func parseBenchForm(vals url.Values) (*optics.Bench, []optics.Problem) {
 		Format:        optics.FormatBenchV1,
 		Title:         f.text("title"),
 		Notes:         strings.TrimSpace(strings.ReplaceAll(f.get("notes"), "\r\n", "\n")),
-		WavelengthsNM: f.list("wavelengths_nm", wavelength),
+		WavelengthsNM: f.list("wavelengths_nm", optics.Wavelength),
 	}
-	b.Table = optics.Table{
-		Grid:         f.text("table.grid"),
-		WidthMM:      f.num("table.width_mm", length),
-		DepthMM:      f.num("table.depth_mm", length),
-		BeamHeightMM: f.num("table.beam_height_mm", length),
-		HoleOffsetMM: f.optNum("table.hole_offset_mm", length),
-	}
+	f.fields("table.", optics.TableFields, &b.Table)
 	b.Source = f.source()
 	b.Materials = f.materials()
 	for i := 0; f.has(fmt.Sprintf("elements[%d].type", i)); i++ {
@@ -173,50 +167,96 @@ func parseBenchForm(vals url.Values) (*optics.Bench, []optics.Problem) {
 	return b, f.problems
 }
 
+// source reads the source: where it stands and its fan size, its kind's own fields, then its rays
+// and beam (in this order, which is the order of the problems).
 func (f *formReader) source() optics.Source {
-	s := optics.Source{
-		XMM:        f.num("source.x_mm", length),
-		YMM:        f.num("source.y_mm", length),
-		HeadingDeg: f.num("source.heading_deg", angle),
-		Kind:       f.text("source.kind"),
-		FanRays:    f.count("source.fan_rays"),
+	var s optics.Source
+	var objects []optics.Field
+	for _, fl := range optics.SourceFields {
+		if fl.Fields != nil {
+			objects = append(objects, fl)
+		} else {
+			f.field("source."+fl.Key, fl, &s)
+		}
 	}
 	shown := f.text("source._kind_shown")
 	if shown != "" && shown != s.Kind {
 		// The kind was changed and applied: its own fields were not on the form yet.
-		def := defaultSource(s.Kind)
-		s.SemiDiameterMM, s.FieldAnglesDeg, s.NA, s.ObjectHeightsMM = def.SemiDiameterMM, def.FieldAnglesDeg, def.NA, def.ObjectHeightsMM
-	} else {
-		switch s.Kind {
-		case optics.SourceCollimated:
-			s.SemiDiameterMM = f.optNum("source.semi_diameter_mm", length)
-			s.FieldAnglesDeg = f.list("source.field_angles_deg", angle)
-		case optics.SourcePoint:
-			s.NA = f.optNum("source.na", plain)
-			s.ObjectHeightsMM = f.list("source.object_heights_mm", length)
-		}
+		s = optics.ChangeSourceKind(s, s.Kind)
+	} else if k, ok := optics.SourceKindOf(s.Kind); ok {
+		f.fields("source.", k.Fields, &s)
 	}
-	for i := 0; f.has(fmt.Sprintf("source.rays[%d].height_mm", i)) && i < maxFormElements; i++ {
-		p := fmt.Sprintf("source.rays[%d].", i)
-		s.Rays = append(s.Rays, optics.ExplicitRay{
-			HeightMM:  f.num(p+"height_mm", length),
-			AngleDeg:  f.num(p+"angle_deg", angle),
-			XMM:       f.zeroNum(p+"x_mm", length),
-			XAngleDeg: f.zeroNum(p+"x_angle_deg", angle),
-		})
-	}
-	if f.text("source.beam.waist_radius_mm")+f.text("source.beam.waist_at_mm")+f.text("source.beam.m2") != "" {
-		s.Beam = &optics.Beam{
-			WaistRadiusMM: f.num("source.beam.waist_radius_mm", length),
-			WaistAtMM:     f.zeroNum("source.beam.waist_at_mm", length),
-			M2:            f.optNum("source.beam.m2", plain),
-		}
-	}
+	f.fields("source.", objects, &s)
 	return s
 }
 
+// fields reads the inputs of fields under prefix into obj, a pointer to the struct they belong to.
+func (f *formReader) fields(prefix string, fields []optics.Field, obj any) {
+	for _, fl := range fields {
+		f.field(prefix+fl.Key, fl, obj)
+	}
+}
+
+// field reads one input into obj by the Go type of its value: a required number must be given, an
+// optional one may be empty (a number without a default then reads as 0), a radius may be flat.
+// An optional object (a beam, a mount) is there when any of its inputs is filled; a list of them
+// has an item for each index whose first input was sent.
+func (f *formReader) field(path string, fl optics.Field, obj any) {
+	switch p := fl.In(obj).(type) {
+	case *string:
+		*p = f.text(path)
+	case *float64:
+		if fl.Required {
+			*p = f.num(path, fl.Quantity)
+		} else {
+			*p = f.zeroNum(path, fl.Quantity)
+		}
+	case **float64:
+		if fl.Flat {
+			*p = f.radius(path, fl.Quantity)
+		} else {
+			*p = f.optNum(path, fl.Quantity)
+		}
+		if *p == nil && fl.Hint != "" && !f.problemAt(path) {
+			f.add(path, "is required; %s", fl.Hint)
+		}
+	case *[]float64:
+		*p = f.list(path, fl.Quantity)
+	case *[]*float64:
+		*p = f.faces(path)
+	case *[]string:
+		*p = splitList(f.get(path))
+	case **int:
+		*p = f.count(path)
+	case **optics.Beam:
+		*p = optionalObject[optics.Beam](f, path+".", fl.Fields)
+	case **optics.Mount:
+		*p = optionalObject[optics.Mount](f, path+".", fl.Fields)
+	case *[]optics.ExplicitRay:
+		for i := 0; f.has(fmt.Sprintf("%s[%d].%s", path, i, fl.Fields[0].Key)) && i < maxFormElements; i++ {
+			var r optics.ExplicitRay
+			f.fields(fmt.Sprintf("%s[%d].", path, i), fl.Fields, &r)
+			*p = append(*p, r)
+		}
+	}
+}
+
+// optionalObject reads an object that is there when any of its inputs is filled.
+func optionalObject[T any](f *formReader, prefix string, fields []optics.Field) *T {
+	given := false
+	for _, fl := range fields {
+		given = given || f.text(prefix+fl.Key) != ""
+	}
+	if !given {
+		return nil
+	}
+	obj := new(T)
+	f.fields(prefix, fields, obj)
+	return obj
+}
+
 // zeroNum reads a number whose empty field means 0.
-func (f *formReader) zeroNum(path string, q quantity) float64 {
+func (f *formReader) zeroNum(path string, q *optics.Quantity) float64 {
 	if f.text(path) == "" {
 		return 0
 	}
@@ -239,50 +279,23 @@ func (f *formReader) materials() map[string]optics.MaterialSpec {
 	return m
 }
 
+// element reads element i: its common fields, then its type's own. When the type was changed and
+// applied, the new type's fields were not on the form yet: the element becomes one of the new type
+// (optics.ChangeType), keeping what the two types share.
 func (f *formReader) element(i int) optics.Element {
 	p := fmt.Sprintf("elements[%d].", i)
 	typ := f.text(p + "type")
-	e := optics.Element{ID: f.text(p + "id"), Type: typ}
+	e := optics.Element{Type: typ, ID: f.text(p + "id")}
 	shown := f.text(p + "_type_shown")
 	changed := shown != "" && shown != typ
 	if changed {
-		// The type was changed and applied: start from that type's defaults, keep what carries over.
-		e = defaultElement(typ)
-		e.ID = f.text(p + "id")
-		if takesDiameter(typ) && takesDiameter(shown) {
-			e.DiameterMM = f.optNum(p+"diameter_mm", length)
-		}
+		old := optics.Element{Type: shown}
+		f.fields(p, optics.CarriedFields(shown, typ), &old)
+		e = optics.ChangeType(old, typ)
 	}
-	e.GapMM = f.num(p+"gap_mm", length)
-	if f.text(p+"mount.width_mm")+f.text(p+"mount.depth_mm") != "" {
-		e.Mount = &optics.Mount{WidthMM: f.num(p+"mount.width_mm", length), DepthMM: f.num(p+"mount.depth_mm", length)}
-	}
-	if changed {
-		return e
-	}
-	switch typ {
-	case optics.TypeLens:
-		e.FacesMM = f.faces(p + "faces_mm")
-		e.ThicknessesMM = f.list(p+"thicknesses_mm", length)
-		e.Materials = splitList(f.get(p + "materials"))
-		e.DiameterMM = f.optNum(p+"diameter_mm", length)
-	case optics.TypeThinLens:
-		e.FocalMM = f.optNum(p+"focal_mm", length)
-		if e.FocalMM == nil && !f.problemAt(p+"focal_mm") {
-			f.add(p+"focal_mm", "is required; use a length such as 100 mm")
-		}
-		e.DiameterMM = f.optNum(p+"diameter_mm", length)
-	case optics.TypeMirror:
-		e.RadiusMM = f.radius(p + "radius_mm")
-		e.TurnDeg = f.optNum(p+"turn_deg", angle)
-		if e.TurnDeg == nil && !f.problemAt(p+"turn_deg") {
-			f.add(p+"turn_deg", "is required; use the heading change in degrees, e.g. 90")
-		}
-		e.DiameterMM = f.optNum(p+"diameter_mm", length)
-	case optics.TypeAperture:
-		e.DiameterMM = f.optNum(p+"diameter_mm", length)
-	case optics.TypeScreen:
-		e.WidthMM = f.optNum(p+"width_mm", length)
+	f.fields(p, optics.ElementFields, &e) // id and type again, the same texts
+	if k, ok := optics.KindOf(typ); ok && !changed {
+		f.fields(p, k.Fields, &e)
 	}
 	return e
 }
@@ -292,14 +305,6 @@ func (f *formReader) problemAt(path string) bool {
 		if p.Path == path {
 			return true
 		}
-	}
-	return false
-}
-
-func takesDiameter(typ string) bool {
-	switch typ {
-	case optics.TypeLens, optics.TypeThinLens, optics.TypeMirror, optics.TypeAperture:
-		return true
 	}
 	return false
 }

@@ -6,6 +6,8 @@ import (
 	"testing"
 
 	"golang.org/x/net/html"
+
+	"raytable/optics"
 )
 
 func TestHistory(t *testing.T) {
@@ -29,7 +31,7 @@ func TestHistory(t *testing.T) {
 		t.Fatalf("%d steps, want 3", len(steps))
 	}
 	wantIDs := []string{third, second, first}
-	wantChange := []string{"removed " + b.Elements[1].ID, b.Elements[2].ID + " gap_mm " + formatNumber(b.Elements[2].GapMM) + " -> 160", ""}
+	wantChange := []string{"removed " + b.Elements[1].ID, b.Elements[2].ID + " gap_mm " + optics.FormatNumber(b.Elements[2].GapMM) + " -> 160", ""}
 	for i, s := range steps {
 		if got, _ := attr(s, "data-revision"); got != wantIDs[i] {
 			t.Errorf("step %d is %s, want %s", i, got, wantIDs[i])

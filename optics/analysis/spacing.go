@@ -105,11 +105,11 @@ func SpacingTolerances(b *optics.Bench, p *optics.Path, tan paraxial.Result) ([]
 	return rows, basis
 }
 
-// referenceElement is the element the output is looked at: the first dump, where the beam ends,
+// referenceElement is the element the output is looked at: the first that stops rays (a dump),
 // or else the bench's last element.
 func referenceElement(b *optics.Bench) int {
 	for i := range b.Elements {
-		if b.Elements[i].Type == optics.TypeDump {
+		if k, ok := optics.KindOf(b.Elements[i].Type); ok && k.StopsRays {
 			return i
 		}
 	}

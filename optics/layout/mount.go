@@ -1,62 +1,15 @@
 package layout
 
 import (
-	"math"
-
 	"gonum.org/v1/gonum/spatial/r2"
 
 	"raytable/optics"
 )
 
-// Default mount sizes, common practice for 1-inch-class optics on posts (our own round numbers, not
-// any maker's drawing): a lens holder is a plate about 15 mm wider than the optic and 15-20 mm
-// thick along the beam; a mirror mount is roughly square, about 15 mm larger than the mirror; an
-// iris housing is at least 40 mm across whatever its opening; a screen or camera body about 20 mm
-// wider than its sensitive width and 30 mm deep; a beam dump a 30 mm block.
-const (
-	defaultOpticDiameterMM = 25.4 // assumed when a lens, thin lens or mirror gives no diameter
-	mountMarginMM          = 15   // mount width beyond the optic's diameter
-	lensMountDepthMM       = 18   // lens holder thickness along the beam
-	lensMountLipMM         = 6    // a thick lens's mount reaches this far beyond its glass
-	irisMinWidthMM         = 40
-	irisMarginMM           = 20
-	irisDepthMM            = 12
-	defaultScreenWidthMM   = 25 // assumed when a screen gives no width
-	screenMarginMM         = 20
-	screenDepthMM          = 30
-	dumpSizeMM             = 30
-)
-
 // DefaultMount is the footprint used for an element without a "mount" of its own: width across the
-// beam and depth along it (for a mirror: along its surface and along its normal).
-func DefaultMount(e *optics.Element) optics.Mount {
-	switch e.Type {
-	case optics.TypeLens, optics.TypeThinLens:
-		d := diameterOr(e.DiameterMM, defaultOpticDiameterMM)
-		depth := float64(lensMountDepthMM)
-		if l := elementLength(e) + lensMountLipMM; l > depth {
-			depth = l
-		}
-		return optics.Mount{WidthMM: d + mountMarginMM, DepthMM: depth}
-	case optics.TypeMirror:
-		s := diameterOr(e.DiameterMM, defaultOpticDiameterMM) + mountMarginMM
-		return optics.Mount{WidthMM: s, DepthMM: s}
-	case optics.TypeAperture:
-		w := diameterOr(e.DiameterMM, 0) + irisMarginMM
-		return optics.Mount{WidthMM: math.Max(w, irisMinWidthMM), DepthMM: irisDepthMM}
-	case optics.TypeScreen:
-		return optics.Mount{WidthMM: diameterOr(e.WidthMM, defaultScreenWidthMM) + screenMarginMM, DepthMM: screenDepthMM}
-	default: // dump, and anything unknown
-		return optics.Mount{WidthMM: dumpSizeMM, DepthMM: dumpSizeMM}
-	}
-}
-
-func diameterOr(d *float64, fallback float64) float64 {
-	if d == nil || !finite(*d) || *d < 0 {
-		return fallback
-	}
-	return *d
-}
+// beam and depth along it (for a mirror: along its surface and along its normal), by its type's
+// rule in the kind table (optics.Kind.Mount).
+func DefaultMount(e *optics.Element) optics.Mount { return optics.DefaultMount(e) }
 
 // MountOf is the element's own mount when it has one, else DefaultMount.
 func MountOf(e *optics.Element) optics.Mount {

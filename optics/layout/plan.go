@@ -184,7 +184,7 @@ func beamEnd(b *optics.Bench) []optics.Warning {
 		return []optics.Warning{{Code: CodeNoBeamEnd, Message: "the bench has no elements: the beam is not terminated; end it on a screen or a dump"}}
 	}
 	last := b.Elements[n-1]
-	if last.Type == optics.TypeScreen || last.Type == optics.TypeDump {
+	if k, ok := optics.KindOf(last.Type); ok && k.EndsPath {
 		return nil
 	}
 	return []optics.Warning{{Code: CodeNoBeamEnd, Element: last.ID, Message: fmt.Sprintf(
