@@ -8,7 +8,6 @@ import (
 	"raytable/optics/numfmt"
 )
 
-
 // CheckBarLabel is printed above the plan's 100 mm check bar.
 const CheckBarLabel = "print at 100 %: this bar must measure 100 mm"
 

@@ -228,10 +228,15 @@ func (t *tableScene) primaryColor() string {
 	return WavelengthColor(0)
 }
 
-// endsTerminated reports whether the path ends on a screen or a dump.
+// endsTerminated reports whether the path ends on an element the beam may end on (a screen or a
+// dump: optics.Kind.EndsPath).
 func (t *tableScene) endsTerminated() bool {
 	n := len(t.r.Elements)
-	return n > 0 && (t.r.Elements[n-1].Type == optics.TypeDump || t.r.Elements[n-1].Type == optics.TypeScreen)
+	if n == 0 {
+		return false
+	}
+	k, ok := optics.KindOf(t.r.Elements[n-1].Type)
+	return ok && k.EndsPath
 }
 
 func (t *tableScene) drawBeam(p *pen) {

@@ -46,28 +46,39 @@ func drawSideElement(p *pen, f *sideFrame, e *optics.ElementPlace, h float64) {
 	if len(e.Faces) > 0 {
 		z = e.Faces[0].PathMM
 	}
-	switch e.Type {
-	case optics.TypeLens:
-		drawLens(p, f, e, h)
-	case optics.TypeThinLens:
+	draw, ok := sideDrawings[e.Type]
+	if !ok {
+		p.line(f.x(z), f.y(h), f.x(z), f.y(-h), `stroke="#888888"`)
+		return
+	}
+	draw(p, f, e, z, h)
+}
+
+// sideDrawings is how each element type of optics.Kinds looks in the side view, at path position z
+// with half-height h (mm); a test checks that every type has one.
+var sideDrawings = map[string]func(p *pen, f *sideFrame, e *optics.ElementPlace, z, h float64){
+	optics.TypeLens: func(p *pen, f *sideFrame, e *optics.ElementPlace, z, h float64) { drawLens(p, f, e, h) },
+	optics.TypeThinLens: func(p *pen, f *sideFrame, e *optics.ElementPlace, z, h float64) {
 		drawThinLens(p, f, z, visibleHalf(f, h), e.FocalMM != nil && *e.FocalMM < 0)
-	case optics.TypeMirror:
+	},
+	optics.TypeMirror: func(p *pen, f *sideFrame, e *optics.ElementPlace, z, h float64) {
 		var radius *float64
 		if len(e.Faces) > 0 {
 			radius = e.Faces[0].RadiusMM
 		}
 		drawMirror(p, f, z, visibleHalf(f, h), radius)
-	case optics.TypeAperture:
+	},
+	optics.TypeAperture: func(p *pen, f *sideFrame, e *optics.ElementPlace, z, h float64) {
 		drawAperture(p, f, z, e.SemiDiameterMM)
-	case optics.TypeScreen:
+	},
+	optics.TypeScreen: func(p *pen, f *sideFrame, e *optics.ElementPlace, z, h float64) {
 		hv := visibleHalf(f, h)
 		p.rect(f.x(z)-2, f.y(hv), 4, 2*hv*f.pxPerMMY(), `fill="#5d5d5d"`)
-	case optics.TypeDump:
+	},
+	optics.TypeDump: func(p *pen, f *sideFrame, e *optics.ElementPlace, z, h float64) {
 		hv := visibleHalf(f, h)
 		p.rect(f.x(z), f.y(hv), 10, 2*hv*f.pxPerMMY(), `fill="#262626"`)
-	default:
-		p.line(f.x(z), f.y(h), f.x(z), f.y(-h), `stroke="#888888"`)
-	}
+	},
 }
 
 // faceOutline samples one face from height y0 to y1 (mm) as pixel points: a circular arc of the

@@ -73,7 +73,8 @@ func rayPoints(f *sideFrame, faces faceIndex, ray *optics.Ray) (xs, ys []float64
 
 // runsOn reports whether a ray leaves the last element it met and goes on.
 func runsOn(ray *optics.Ray, lastType string) bool {
-	return ray.Status == optics.RayOK && ray.StoppedAt == "" && lastType != optics.TypeDump
+	k, known := optics.KindOf(lastType)
+	return ray.Status == optics.RayOK && ray.StoppedAt == "" && !(known && k.StopsRays)
 }
 
 // paraxialPoints returns the paraxial twin: the start, then the paraxial height at each face
