@@ -4,12 +4,12 @@ import (
 	"encoding/json"
 	"fmt"
 	"math"
-	"os"
 	"reflect"
 	"strconv"
 	"testing"
 
 	"raytable/optics"
+	"raytable/optics/benchtest"
 	"raytable/optics/internal/approx"
 	"raytable/optics/paraxial"
 )
@@ -259,18 +259,7 @@ func fmtPtr(v *float64) string {
 	return strconv.FormatFloat(*v, 'g', 6, 64)
 }
 
-func loadDemo(t testing.TB) *optics.Bench {
-	t.Helper()
-	data, err := os.ReadFile("../../testdata/demo-bench.json")
-	if err != nil {
-		t.Fatal(err)
-	}
-	b, err := optics.Decode(data)
-	if err != nil {
-		t.Fatal(err)
-	}
-	return b
-}
+func loadDemo(t testing.TB) *optics.Bench { return benchtest.Load(t, "demo-bench.json") }
 
 // longBench is a valid bench of optics.MaxElements elements: repeated groups of a glass singlet,
 // an iris, a thin lens and a fold mirror, ending on a screen.

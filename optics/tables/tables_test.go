@@ -1,11 +1,10 @@
 package tables
 
 import (
-	"os"
 	"testing"
 
-	"raytable/optics"
 	"raytable/optics/analysis"
+	"raytable/optics/benchtest"
 )
 
 // Each layout's style of joining a name and a unit, as the text report and the pages have always
@@ -79,14 +78,7 @@ func TestPhrase(t *testing.T) {
 // row has a cell for each column of the layouts it appears in, and a few values read as the
 // bench's golden reports give them (testdata/golden/reports/demo-bench.txt, pages/demo.html).
 func TestDemoSections(t *testing.T) {
-	data, err := os.ReadFile("../../testdata/demo-bench.json")
-	if err != nil {
-		t.Fatal(err)
-	}
-	b, err := optics.Decode(data)
-	if err != nil {
-		t.Fatal(err)
-	}
+	b := benchtest.Load(t, "demo-bench.json")
 	r, err := analysis.Run(b)
 	if err != nil {
 		t.Fatal(err)

@@ -1,26 +1,19 @@
 package diagram
 
 import (
-	"os"
 	"strings"
 	"testing"
 
 	"raytable/optics"
 	"raytable/optics/analysis"
+	"raytable/optics/benchtest"
 )
 
 // TestEveryKindIsDrawn keeps the drawings in step with the kind table (DEVELOPERS.md, 'Adding an
 // element kind'): a bench with one default element of every type in optics.Kinds is drawn in the
 // side view and on the table without the grey stroke that stands in for a type with no drawing.
 func TestEveryKindIsDrawn(t *testing.T) {
-	data, err := os.ReadFile("../../testdata/demo-bench.json")
-	if err != nil {
-		t.Fatal(err)
-	}
-	b, err := optics.Decode(data)
-	if err != nil {
-		t.Fatal(err)
-	}
+	b := benchtest.Load(t, "demo-bench.json")
 	b.Elements = nil
 	for _, k := range optics.Kinds {
 		if _, err := optics.AddElement(b, k.Type, len(b.Elements)); err != nil {

@@ -3,14 +3,13 @@ package view
 import (
 	"bytes"
 	"context"
-	"os"
 	"strings"
 	"testing"
 
 	"golang.org/x/net/html"
 
-	"raytable/optics"
 	"raytable/optics/analysis"
+	"raytable/optics/benchtest"
 	"raytable/optics/numfmt"
 )
 
@@ -29,14 +28,7 @@ func textOf(n *html.Node) string {
 // the numbers panel: one body row per element in bench order, the depth of focus in its note, and
 // the tightest gaps marked. The values themselves are checked in optics/analysis.
 func TestNumbersPanelShowsSpacing(t *testing.T) {
-	data, err := os.ReadFile("../../testdata/demo-bench.json")
-	if err != nil {
-		t.Fatal(err)
-	}
-	b, err := optics.Decode(data)
-	if err != nil {
-		t.Fatal(err)
-	}
+	b := benchtest.Load(t, "demo-bench.json")
 	r, err := analysis.Run(b)
 	if err != nil {
 		t.Fatal(err)
