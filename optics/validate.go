@@ -38,7 +38,7 @@ type checker struct {
 	reader
 	b            *Bench
 	userMedia    map[string]material.Medium // user materials without problems, built once
-	checkedMedia map[string]bool             // lens media already checked, so that each is reported once
+	checkedMedia map[string]bool            // lens media already checked, so that each is reported once
 }
 
 func validationProblems(b *Bench) []Problem {
