@@ -8,13 +8,24 @@ const MaxElements = 200
 
 // Element types.
 const (
-	TypeLens     = "lens"      // one or more refracting faces with glass between them
-	TypeThinLens = "thin-lens" // an ideal lens of given focal length at one plane
-	TypeMirror   = "mirror"    // a flat or spherical mirror that turns the beam on the table
-	TypeAperture = "aperture"  // an iris or slit of given clear diameter
-	TypeScreen   = "screen"    // a detector or viewing card: records rays, stops nothing
-	TypeDump     = "dump"      // a beam dump: the end of the beam
+	TypeLens      = "lens"      // one or more refracting faces with glass between them
+	TypeThinLens  = "thin-lens" // an ideal lens of given focal length at one plane
+	TypeMirror    = "mirror"    // a flat or spherical mirror that turns the beam on the table
+	TypeAperture  = "aperture"  // an iris or slit of given clear diameter
+	TypeScreen    = "screen"    // a detector or viewing card: records rays, stops nothing
+	TypeDump      = "dump"      // a beam dump: the end of the beam
+	TypeSplitter  = "splitter"  // a beam splitter, pick-off or dichroic: part of the light turns into its reflected arm
+	TypePeriscope = "periscope" // two 45° flat mirrors that lift or lower the beam and may turn it
 )
+
+// Dichroic splitters send each wavelength wholly to one port.
+const (
+	ReflectsShorter = "shorter" // wavelengths below the edge are reflected
+	ReflectsLonger  = "longer"  // wavelengths above the edge are reflected
+)
+
+// DefaultReflect is the fraction a splitter reflects when it does not say.
+const DefaultReflect = 0.5
 
 // Source kinds.
 const (
@@ -43,6 +54,16 @@ type Bench struct {
 	Source        Source                  `json:"source"`
 	Materials     map[string]MaterialSpec `json:"materials,omitempty"`
 	Elements      []Element               `json:"elements"`
+	MoreSources   []MoreSource            `json:"more_sources,omitempty"` // further lasers on the same table
+}
+
+// MoreSource is a further light source on the bench's table with its own element list. Its arms
+// may reach the first source's parts through same_as.
+type MoreSource struct {
+	ID            string    `json:"id"`
+	Source                  // every source field, inline in the bench file
+	WavelengthsNM []float64 `json:"wavelengths_nm,omitempty"` // its own wavelengths; the bench's when absent
+	Elements      []Element `json:"elements"`
 }
 
 // PrimaryWavelengthNM is the first wavelength, the one system values are given at.
@@ -74,6 +95,8 @@ type Source struct {
 	FanRays *int          `json:"fan_rays,omitempty"` // rays per meridional fan; DefaultFanRays when absent
 	Rays    []ExplicitRay `json:"rays,omitempty"`
 	Beam    *Beam         `json:"beam,omitempty"`
+
+	HeightMM *float64 `json:"height_mm,omitempty"` // beam height above the table; table.beam_height_mm when absent
 }
 
 // FanRayCount is the number of rays in each fan.
@@ -147,8 +170,28 @@ type Element struct {
 	// screen
 	WidthMM *float64 `json:"width_mm,omitempty"`
 
+	// splitter
+	Reflect     *float64  `json:"reflect,omitempty"`      // fraction of the power reflected, 0 to 1; DefaultReflect when absent
+	Dichroic    *Dichroic `json:"dichroic,omitempty"`     // each wavelength wholly to one port instead of reflect
+	ThicknessMM *float64  `json:"thickness_mm,omitempty"` // a plate's thickness; absent: a reflecting surface of no thickness
+	Material    string    `json:"material,omitempty"`     // a plate's medium
+	Reflected   []Element `json:"reflected,omitempty"`    // the elements of the reflected arm, in beam order
+
+	// periscope
+	RiseMM *float64 `json:"rise_mm,omitempty"` // height change, + up
+
+	// any type: another pass through the part with this id, placed earlier
+	SameAs string `json:"same_as,omitempty"`
+
 	// any type: footprint of the mount on the table
 	Mount *Mount `json:"mount,omitempty"`
+}
+
+// Dichroic is a splitter's wavelength edge: each wavelength on the Reflects side of EdgeNM is
+// reflected, every other one transmitted.
+type Dichroic struct {
+	EdgeNM   float64 `json:"edge_nm"`
+	Reflects string  `json:"reflects"` // ReflectsShorter or ReflectsLonger
 }
 
 // Mount is a mount's footprint on the table, centred on the element and aligned with the beam:

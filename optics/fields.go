@@ -135,6 +135,7 @@ var (
 		{Key: "source", Required: true, Fields: SourceFields},
 		{Key: "materials", Label: "materials (JSON, as in the bench file)", Multiline: true, Fields: MaterialFields},
 		{Key: "elements", Required: true, Fields: ElementFields},
+		{Key: "more_sources", Fields: MoreSourceFields},
 	}
 	TableFields = []Field{
 		{Key: "grid", Label: "hole grid", Required: true},
@@ -152,6 +153,7 @@ var (
 		{Key: "rays", Fields: RayFields},
 		{Key: "beam", Fields: BeamFields},
 		{Key: "fan_rays", Label: "rays per fan (empty: " + strconv.Itoa(DefaultFanRays) + ")", Absent: strconv.Itoa(DefaultFanRays)},
+		{Key: "height_mm", Label: "beam height (empty: the table's)", Quantity: Length, Absent: "the table's"},
 	}
 	RayFields = []Field{
 		{Key: "height_mm", Label: "height", Quantity: Length, Required: true},
@@ -181,6 +183,14 @@ var (
 		{Key: "type", Label: "type", Required: true, Selects: true},
 		{Key: "gap_mm", Label: "gap from the previous element", Quantity: Length, Required: true},
 		{Key: "mount", Fields: MountFields},
+		{Key: "same_as", Label: "another pass through"},
+	}
+	// MoreSourceFields are a further source's own fields; the source fields (SourceFields and the
+	// kind's) stand inline beside them.
+	MoreSourceFields = []Field{
+		{Key: "id", Label: "id", Required: true},
+		{Key: "wavelengths_nm", Label: "wavelengths (empty: the bench's)", Quantity: Wavelength},
+		{Key: "elements", Required: true, Fields: ElementFields},
 	}
 	MountFields = []Field{
 		{Key: "width_mm", Label: "mount width (empty: by type)", Quantity: Length, Required: true},
@@ -213,6 +223,8 @@ var tables = map[reflect.Type][]Field{
 	reflect.TypeFor[SellmeierSpec](): SellmeierFields,
 	reflect.TypeFor[Element]():       allElementFields,
 	reflect.TypeFor[Mount]():         MountFields,
+	reflect.TypeFor[Dichroic]():      DichroicFields,
+	reflect.TypeFor[MoreSource]():    MoreSourceFields,
 }
 
 // withKinds is common followed by the fields of every kind, each key once (see union).

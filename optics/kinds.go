@@ -56,6 +56,23 @@ var (
 			About: "how far it turns the beam on the table", Hint: "use the heading change in degrees, e.g. 90"},
 		clearDiameter,
 	}
+	splitterFields = []Field{
+		{Key: "turn_deg", Label: "turn of the reflected beam (+ counter-clockwise)", Quantity: Angle, Required: true,
+			About: "how far it turns the reflected beam on the table", Hint: "use the heading change in degrees, e.g. 90"},
+		{Key: "reflect", Label: "fraction reflected (empty: 0.5)", Quantity: Plain, Absent: "0.5"},
+		{Key: "dichroic", Label: "dichroic edge (JSON: edge_nm, reflects)", Multiline: true, Fields: DichroicFields},
+		{Key: "thickness_mm", Label: "plate thickness (empty: no plate)", Quantity: Length},
+		{Key: "material", Label: "plate material"},
+		clearDiameter,
+		{Key: "reflected", Fields: ElementFields},
+	}
+	periscopeFields = []Field{
+		{Key: "rise_mm", Label: "rise (+ up)", Quantity: Length, Required: true, About: "how far it lifts the beam",
+			Hint: "use a length such as 50 mm (negative lowers)"},
+		{Key: "turn_deg", Label: "turn (+ counter-clockwise, 0 straight on)", Quantity: Angle, Required: true,
+			About: "how far it turns the beam on the table", Hint: "use the heading change in degrees, 0 for none"},
+		clearDiameter,
+	}
 	screenFields = []Field{{Key: "width_mm", Label: "width (empty: unlimited)", Quantity: Length}}
 )
 
@@ -75,6 +92,12 @@ var (
 // defaultOpticDiameterMM is assumed for the mount of a lens, thin lens or mirror that gives no
 // diameter: a 1-inch optic.
 const defaultOpticDiameterMM = 25.4
+
+// DichroicFields is the table of a splitter's dichroic edge.
+var DichroicFields = []Field{
+	{Key: "edge_nm", Label: "edge", Quantity: Wavelength, Required: true},
+	{Key: "reflects", Label: "reflects (shorter or longer)", Required: true},
+}
 
 // Kinds lists the element types, in the order messages and the form's list name them.
 var Kinds = []Kind{
@@ -115,6 +138,16 @@ var Kinds = []Kind{
 		StopsRays: true, EndsPath: true,
 		Mount:   dumpMount,
 		Default: func() Element { return Element{} },
+	},
+	{
+		Type: TypeSplitter, Noun: "splitter", Label: "splitter (beam splitter, pick-off, dichroic)", IDPrefix: "BS",
+		Fields: splitterFields, Mount: mirrorMount,
+		Default: func() Element { return Element{TurnDeg: new(90.0), DiameterMM: new(25.4)} },
+	},
+	{
+		Type: TypePeriscope, Noun: "periscope", Label: "periscope (raise or lower)", IDPrefix: "P",
+		Fields: periscopeFields, Mount: mirrorMount,
+		Default: func() Element { return Element{RiseMM: new(50.0), TurnDeg: new(0.0), DiameterMM: new(25.4)} },
 	},
 }
 
