@@ -20,6 +20,8 @@ type Report struct {
 	Holes         HoleGrid       `json:"holes"`
 	Placement     []Placement    `json:"placement,omitempty"`
 	Warnings      []Warning      `json:"warnings"`
+	Arms          []ArmReport    `json:"arms,omitempty"`     // every arm, the main one first (branching benches)
+	Meetings      []Meeting      `json:"meetings,omitempty"` // parts that two or more beams reach
 
 	// Spacing says how tightly each gap must be held, one row per element up to the element the
 	// image is looked at (see SpacingTolerance); SpacingBasis is the allowance it is measured
