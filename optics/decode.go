@@ -99,14 +99,25 @@ func (r *reader) bench(data []byte) *Bench {
 // source reads the source; its kind decides which keys it may have.
 func (r *reader) source(path string, raw json.RawMessage) Source {
 	var s Source
-	r.kinded(path, raw, SourceFields, allSourceFields, reflect.ValueOf(&s).Elem(), func(kind string) ([]Field, string, bool) {
-		k, ok := SourceKindOf(kind)
-		if !ok {
-			return nil, "", false
-		}
-		return k.Fields, " for a " + k.Noun, true
-	})
+	r.kinded(path, raw, SourceFields, allSourceFields, reflect.ValueOf(&s).Elem(), sourceKindFieldsOf)
 	return s
+}
+
+// moreSource reads a further source: its own keys and, inline beside them, a source's, whose kind
+// decides which it may have.
+func (r *reader) moreSource(path string, raw json.RawMessage) MoreSource {
+	var m MoreSource
+	r.kinded(path, raw, union(moreSourceOwnFields, SourceFields), MoreSourceFields, reflect.ValueOf(&m).Elem(), sourceKindFieldsOf)
+	return m
+}
+
+// sourceKindFieldsOf gives a source kind's own fields and how messages name it, for kinded.
+func sourceKindFieldsOf(kind string) ([]Field, string, bool) {
+	k, ok := SourceKindOf(kind)
+	if !ok {
+		return nil, "", false
+	}
+	return k.Fields, " for a " + k.Noun, true
 }
 
 // element reads one element; its type decides which keys it may have.

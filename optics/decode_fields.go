@@ -63,6 +63,12 @@ func (r *reader) value(path string, raw json.RawMessage, f Field, dst reflect.Va
 				*p = append(*p, r.element(index(path, i), item))
 			}
 		}
+	case *[]MoreSource:
+		if items, ok := r.array(path, raw); ok {
+			for i, item := range items {
+				*p = append(*p, r.moreSource(index(path, i), item))
+			}
+		}
 	case *map[string]MaterialSpec:
 		*p = r.materials(path, raw)
 	default:

@@ -107,6 +107,10 @@ func dotted(path string) func(string) string {
 func (d *differ) object(name func(string) string, a, b reflect.Value, skip string) {
 	fields := fieldsOf(a.Type())
 	for i := range a.NumField() {
+		if inline(a.Type().Field(i)) { // a further source's source fields, named as its own
+			d.object(name, a.Field(i), b.Field(i), skip)
+			continue
+		}
 		key := tagKey(a.Type().Field(i))
 		if key == skip {
 			continue
@@ -146,7 +150,7 @@ func (d *differ) value(path string, f Field, a, b reflect.Value) {
 	case map[string]MaterialSpec:
 		d.materials(x, b.Interface().(map[string]MaterialSpec))
 	case []Element:
-		d.elements(x, b.Interface().([]Element))
+		d.elements(path, x, b.Interface().([]Element))
 	default:
 		d.nested(path, a, b)
 	}
@@ -205,16 +209,22 @@ func (d *differ) materials(a, b map[string]MaterialSpec) {
 	}
 }
 
-func (d *differ) elements(a, b []Element) {
+// elements compares one element list; the main list's lines name no list, a reflected list's or a
+// further source's say which ("added S3 (screen) at position 1 in BS1 reflected").
+func (d *differ) elements(path string, a, b []Element) {
+	in := ""
+	if path != "elements" {
+		in = " in " + path
+	}
 	posA, posB := firstPositions(a), firstPositions(b)
 	for i, e := range a {
 		if _, ok := posB[e.ID]; !ok || posA[e.ID] != i {
-			d.line("removed %s", quoteIfOdd(e.ID))
+			d.line("removed %s%s", quoteIfOdd(e.ID), in)
 		}
 	}
 	for i, e := range b {
 		if _, ok := posA[e.ID]; !ok || posB[e.ID] != i {
-			d.line("added %s (%s) at position %d", quoteIfOdd(e.ID), e.Type, i+1)
+			d.line("added %s (%s) at position %d%s", quoteIfOdd(e.ID), e.Type, i+1, in)
 		}
 	}
 	// Kept elements, in old and in new order; those outside the longest common subsequence moved.
@@ -237,11 +247,11 @@ func (d *differ) elements(a, b []Element) {
 		from, to := posA[id]+1, posB[id]+1
 		switch {
 		case from != to:
-			d.line("moved %s from %d to %d", quoteIfOdd(id), from, to)
+			d.line("moved %s from %d to %d%s", quoteIfOdd(id), from, to, in)
 		case to == 1:
-			d.line("moved %s to the front", quoteIfOdd(id))
+			d.line("moved %s to the front%s", quoteIfOdd(id), in)
 		default: // same number, other neighbours: say where it went
-			d.line("moved %s to after %s", quoteIfOdd(id), quoteIfOdd(b[to-2].ID))
+			d.line("moved %s to after %s%s", quoteIfOdd(id), quoteIfOdd(b[to-2].ID), in)
 		}
 	}
 	for _, id := range keptB {

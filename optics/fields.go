@@ -64,15 +64,36 @@ func (f Field) In(obj any) any {
 	return f.value(reflect.ValueOf(obj).Elem()).Addr().Interface()
 }
 
-// value is the struct field of v (a struct value) with f's JSON name.
+// value is the struct field of v (a struct value) with f's JSON name, looking into an embedded
+// struct whose fields stand inline (a further source's Source).
 func (f Field) value(v reflect.Value) reflect.Value {
+	if fv, ok := f.lookup(v); ok {
+		return fv
+	}
+	panic(fmt.Sprintf("optics: %s has no field with JSON name %q", v.Type(), f.Key))
+}
+
+func (f Field) lookup(v reflect.Value) (reflect.Value, bool) {
 	t := v.Type()
 	for i := range t.NumField() {
-		if tagKey(t.Field(i)) == f.Key {
-			return v.Field(i)
+		sf := t.Field(i)
+		if inline(sf) {
+			if fv, ok := f.lookup(v.Field(i)); ok {
+				return fv, true
+			}
+			continue
+		}
+		if tagKey(sf) == f.Key {
+			return v.Field(i), true
 		}
 	}
-	panic(fmt.Sprintf("optics: %s has no field with JSON name %q", t, f.Key))
+	return reflect.Value{}, false
+}
+
+// inline reports whether a struct field is an embedded struct whose fields the bench file has
+// inline, beside the outer object's own.
+func inline(sf reflect.StructField) bool {
+	return sf.Anonymous && sf.Tag.Get("json") == "" && sf.Type.Kind() == reflect.Struct
 }
 
 // tagKey is the JSON name of a struct field.
@@ -185,13 +206,15 @@ var (
 		{Key: "mount", Fields: MountFields},
 		{Key: "same_as", Label: "another pass through"},
 	}
-	// MoreSourceFields are a further source's own fields; the source fields (SourceFields and the
-	// kind's) stand inline beside them.
-	MoreSourceFields = []Field{
+	// moreSourceOwnFields are a further source's own fields; the source fields (SourceFields and
+	// the kind's) stand inline beside them (MoreSourceFields).
+	moreSourceOwnFields = []Field{
 		{Key: "id", Label: "id", Required: true},
 		{Key: "wavelengths_nm", Label: "wavelengths (empty: the bench's)", Quantity: Wavelength},
 		{Key: "elements", Required: true, Fields: ElementFields},
 	}
+	// MoreSourceFields are every key of a further source: its own and then the source's.
+	MoreSourceFields = union(moreSourceOwnFields, allSourceFields)
 	MountFields = []Field{
 		{Key: "width_mm", Label: "mount width (empty: by type)", Quantity: Length, Required: true},
 		{Key: "depth_mm", Label: "mount depth", Quantity: Length, Required: true},

@@ -52,13 +52,11 @@ var (
 	}
 	mirrorFields = []Field{
 		{Key: "radius_mm", Label: "radius (+ concave, flat)", Quantity: Length, Flat: true},
-		{Key: "turn_deg", Label: "turn (+ counter-clockwise)", Quantity: Angle, Required: true,
-			About: "how far it turns the beam on the table", Hint: "use the heading change in degrees, e.g. 90"},
+		turn("turn (+ counter-clockwise)"),
 		clearDiameter,
 	}
 	splitterFields = []Field{
-		{Key: "turn_deg", Label: "turn of the reflected beam (+ counter-clockwise)", Quantity: Angle, Required: true,
-			About: "how far it turns the reflected beam on the table", Hint: "use the heading change in degrees, e.g. 90"},
+		turn("turn of the reflected beam (+ counter-clockwise)"),
 		{Key: "reflect", Label: "fraction reflected (empty: 0.5)", Quantity: Plain, Absent: "0.5"},
 		{Key: "dichroic", Label: "dichroic edge (JSON: edge_nm, reflects)", Multiline: true, Fields: DichroicFields},
 		{Key: "thickness_mm", Label: "plate thickness (empty: no plate)", Quantity: Length},
@@ -69,12 +67,18 @@ var (
 	periscopeFields = []Field{
 		{Key: "rise_mm", Label: "rise (+ up)", Quantity: Length, Required: true, About: "how far it lifts the beam",
 			Hint: "use a length such as 50 mm (negative lowers)"},
-		{Key: "turn_deg", Label: "turn (+ counter-clockwise, 0 straight on)", Quantity: Angle, Required: true,
-			About: "how far it turns the beam on the table", Hint: "use the heading change in degrees, 0 for none"},
+		turn("turn (+ counter-clockwise, 0 straight on)"),
 		clearDiameter,
 	}
 	screenFields = []Field{{Key: "width_mm", Label: "width (empty: unlimited)", Quantity: Length}}
 )
+
+// turn is the heading change of a mirror, a splitter's reflected port or a periscope: one meaning,
+// with a label that says what turns.
+func turn(label string) Field {
+	return Field{Key: "turn_deg", Label: label, Quantity: Angle, Required: true,
+		About: "how far it turns the beam on the table", Hint: "use the heading change in degrees, e.g. 90"}
+}
 
 // Default mount sizes, common practice for 1-inch-class optics on posts (our own round numbers, not
 // any maker's drawing): a lens holder is a plate about 15 mm wider than the optic and 15-20 mm
@@ -143,11 +147,13 @@ var Kinds = []Kind{
 		Type: TypeSplitter, Noun: "splitter", Label: "splitter (beam splitter, pick-off, dichroic)", IDPrefix: "BS",
 		Fields: splitterFields, Mount: mirrorMount,
 		Default: func() Element { return Element{TurnDeg: new(90.0), DiameterMM: new(25.4)} },
+		check:   (*checker).splitter,
 	},
 	{
 		Type: TypePeriscope, Noun: "periscope", Label: "periscope (raise or lower)", IDPrefix: "P",
 		Fields: periscopeFields, Mount: mirrorMount,
 		Default: func() Element { return Element{RiseMM: new(50.0), TurnDeg: new(0.0), DiameterMM: new(25.4)} },
+		check:   (*checker).periscope,
 	},
 }
 

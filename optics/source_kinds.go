@@ -10,7 +10,7 @@ type SourceKind struct {
 	// Default gives a new source's own fields (DefaultSource sets the kind).
 	Default func() Source
 
-	check func(v *checker) // its own rules beyond presence and strays
+	check func(v *checker, path string, s *Source) // its own rules beyond presence and strays
 }
 
 // SourceKinds lists the source kinds, in the order messages name them. The first is the one an

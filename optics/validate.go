@@ -174,61 +174,66 @@ func (v *checker) table() {
 	}
 }
 
-func (v *checker) source() {
-	s := &v.b.Source
-	v.length("source.x_mm", s.XMM)
-	v.length("source.y_mm", s.YMM)
-	if v.finite("source.heading_deg", s.HeadingDeg) && math.Abs(s.HeadingDeg) > MaxHeadingDeg {
-		v.add("source.heading_deg", "%s° is out of range: use a heading between -360° and 360°", fmtNum(s.HeadingDeg))
+func (v *checker) source() { v.sourceAt("source", &v.b.Source) }
+
+// sourceAt checks a source at path: the first source, or a further source whose fields stand inline
+// in its more_sources entry.
+func (v *checker) sourceAt(path string, s *Source) {
+	at := func(key string) string { return field(path, key) }
+	v.length(at("x_mm"), s.XMM)
+	v.length(at("y_mm"), s.YMM)
+	if v.finite(at("heading_deg"), s.HeadingDeg) && math.Abs(s.HeadingDeg) > MaxHeadingDeg {
+		v.add(at("heading_deg"), "%s° is out of range: use a heading between -360° and 360°", fmtNum(s.HeadingDeg))
 	}
 	if k, known := SourceKindOf(s.Kind); known {
 		sv := reflect.ValueOf(s).Elem()
-		v.stray("source", sv, sourceKindFields, keys(k.Fields), " for a "+k.Noun)
-		v.need("source", sv, k.Fields, k.Noun)
-		k.check(v)
+		v.stray(path, sv, sourceKindFields, keys(k.Fields), " for a "+k.Noun)
+		v.need(path, sv, k.Fields, k.Noun)
+		k.check(v, path, s)
 	} else {
-		v.add("source.kind", "must be %s, got %q", quotedList(SourceKindNames()), s.Kind)
+		v.add(at("kind"), "must be %s, got %q", quotedList(SourceKindNames()), s.Kind)
 	}
 	if s.FanRays != nil && (*s.FanRays < 1 || *s.FanRays > MaxFanRays) {
-		v.add("source.fan_rays", "must be between 1 and %d rays, got %d", MaxFanRays, *s.FanRays)
+		v.add(at("fan_rays"), "must be between 1 and %d rays, got %d", MaxFanRays, *s.FanRays)
 	}
 	for i, r := range s.Rays {
-		p := index("source.rays", i)
+		p := index(at("rays"), i)
 		v.length(field(p, "height_mm"), r.HeightMM)
 		v.angle(field(p, "angle_deg"), r.AngleDeg)
 		v.length(field(p, "x_mm"), r.XMM)
 		v.angle(field(p, "x_angle_deg"), r.XAngleDeg)
 	}
 	if bm := s.Beam; bm != nil {
-		v.positive("source.beam.waist_radius_mm", bm.WaistRadiusMM)
-		v.length("source.beam.waist_at_mm", bm.WaistAtMM)
-		if bm.M2 != nil && v.finite("source.beam.m2", *bm.M2) && *bm.M2 < 1 {
-			v.add("source.beam.m2", "M² is at least 1 for any real beam, got %s", fmtNum(*bm.M2))
+		v.positive(at("beam.waist_radius_mm"), bm.WaistRadiusMM)
+		v.length(at("beam.waist_at_mm"), bm.WaistAtMM)
+		if bm.M2 != nil && v.finite(at("beam.m2"), *bm.M2) && *bm.M2 < 1 {
+			v.add(at("beam.m2"), "M² is at least 1 for any real beam, got %s", fmtNum(*bm.M2))
 		} else if bm.M2 != nil && *bm.M2 > MaxM2 {
-			v.add("source.beam.m2", "M² of %s is beyond %s, where a Gaussian beam model no longer describes the light", fmtNum(*bm.M2), fmtNum(MaxM2))
+			v.add(at("beam.m2"), "M² of %s is beyond %s, where a Gaussian beam model no longer describes the light", fmtNum(*bm.M2), fmtNum(MaxM2))
 		}
+	}
+	if s.HeightMM != nil {
+		v.nonNegative(at("height_mm"), *s.HeightMM)
 	}
 }
 
 // collimated checks the fields of a collimated source.
-func (v *checker) collimated() {
-	s := &v.b.Source
+func (v *checker) collimated(path string, s *Source) {
 	if s.SemiDiameterMM != nil {
-		v.positive("source.semi_diameter_mm", *s.SemiDiameterMM)
+		v.positive(field(path, "semi_diameter_mm"), *s.SemiDiameterMM)
 	}
 	for i, a := range s.FieldAnglesDeg {
-		v.angle(index("source.field_angles_deg", i), a)
+		v.angle(index(field(path, "field_angles_deg"), i), a)
 	}
 }
 
 // pointSource checks the fields of a point source.
-func (v *checker) pointSource() {
-	s := &v.b.Source
-	if s.NA != nil && v.finite("source.na", *s.NA) && (*s.NA <= 0 || *s.NA >= 1) {
-		v.add("source.na", "numerical aperture %s must lie strictly between 0 and 1", fmtNum(*s.NA))
+func (v *checker) pointSource(path string, s *Source) {
+	if s.NA != nil && v.finite(field(path, "na"), *s.NA) && (*s.NA <= 0 || *s.NA >= 1) {
+		v.add(field(path, "na"), "numerical aperture %s must lie strictly between 0 and 1", fmtNum(*s.NA))
 	}
 	for i, h := range s.ObjectHeightsMM {
-		v.length(index("source.object_heights_mm", i), h)
+		v.length(index(field(path, "object_heights_mm"), i), h)
 	}
 }
 

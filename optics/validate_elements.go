@@ -7,42 +7,82 @@ import (
 	"unicode/utf8"
 )
 
+// elements checks every element list of the tree (elementLists) and the further sources: each
+// element by its type's rules, a same_as pass by the pass rules, ids unique over the whole tree,
+// the limits of a branching bench; then, when everything else holds, the geometry of the passes.
 func (v *checker) elements() {
-	els := v.b.Elements
-	if len(els) > MaxElements {
-		v.add("elements", "has %d elements; at most %d are allowed", len(els), MaxElements)
+	lists := elementLists(v.b)
+	total := 0
+	for _, l := range lists {
+		total += len(*l.Els)
 	}
-	firstUse := map[string]int{}
-	for i := range els {
-		e := &els[i]
-		p := index("elements", i)
-		v.elementID(p, e.ID, i, firstUse)
-		if v.length(field(p, "gap_mm"), e.GapMM) && e.GapMM < 0 {
-			v.add(field(p, "gap_mm"), "gap %s mm is negative: negative gaps are not supported, since elements follow one another along the beam",
-				fmtNum(e.GapMM))
+	switch {
+	case total > MaxElements && len(lists) == 1:
+		v.add("elements", "has %d elements; at most %d are allowed", total, MaxElements)
+	case total > MaxElements:
+		v.add("elements", "the bench has %d elements over all its lists; at most %d are allowed", total, MaxElements)
+	}
+	v.moreSources()
+	firstUse := map[string]string{}
+	for _, ms := range v.b.MoreSources {
+		if ms.ID != "" {
+			firstUse[ms.ID] = "" // reported by moreSources when it clashes with an element
 		}
-		if e.Mount != nil {
-			v.positive(field(p, "mount.width_mm"), e.Mount.WidthMM)
-			v.positive(field(p, "mount.depth_mm"), e.Mount.DepthMM)
-		}
-		k, known := KindOf(e.Type)
-		if !known {
-			v.add(field(p, "type"), "unknown element type %q: use one of %s", e.Type, strings.Join(KindTypes(), ", "))
+	}
+	placed := map[string]*Element{} // parts placed so far, in depth-first order
+	for _, l := range lists {
+		if l.Depth > MaxArmDepth {
+			v.add(l.Path, "reflected lists nest %d deep here; at most %d levels are allowed", l.Depth, MaxArmDepth)
 			continue
 		}
-		ev := reflect.ValueOf(e).Elem()
-		v.stray(p, ev, elementKindFields, append(keys(ElementFields), keys(k.Fields)...), " for type "+e.Type)
-		// Checked on every type, so that a stray diameter also hears when it is not positive.
-		diameterOK := e.DiameterMM == nil || v.positive(field(p, "diameter_mm"), *e.DiameterMM)
-		v.need(p, ev, k.Fields, k.Noun)
-		if k.check != nil {
-			k.check(v, p, e, diameterOK)
+		for i := range *l.Els {
+			e := &(*l.Els)[i]
+			p := index(l.Path, i)
+			v.element(p, e, firstUse, placed)
+			if e.SameAs == "" && e.ID != "" {
+				if _, dup := placed[e.ID]; !dup {
+					placed[e.ID] = e
+				}
+			}
 		}
+	}
+	if len(v.problems) == 0 {
+		v.passGeometry()
 	}
 }
 
-// elementID checks that an id is non-empty, short, plain and not used before.
-func (v *checker) elementID(p, id string, i int, firstUse map[string]int) {
+// element checks one element at path p.
+func (v *checker) element(p string, e *Element, firstUse map[string]string, placed map[string]*Element) {
+	v.elementID(p, e.ID, firstUse)
+	if v.length(field(p, "gap_mm"), e.GapMM) && e.GapMM < 0 {
+		v.add(field(p, "gap_mm"), "gap %s mm is negative: negative gaps are not supported, since elements follow one another along the beam",
+			fmtNum(e.GapMM))
+	}
+	if e.Mount != nil {
+		v.positive(field(p, "mount.width_mm"), e.Mount.WidthMM)
+		v.positive(field(p, "mount.depth_mm"), e.Mount.DepthMM)
+	}
+	k, known := KindOf(e.Type)
+	if !known {
+		v.add(field(p, "type"), "unknown element type %q: use one of %s", e.Type, strings.Join(KindTypes(), ", "))
+		return
+	}
+	if e.SameAs != "" {
+		v.pass(p, e, placed)
+		return
+	}
+	ev := reflect.ValueOf(e).Elem()
+	v.stray(p, ev, elementKindFields, append(keys(ElementFields), keys(k.Fields)...), " for type "+e.Type)
+	// Checked on every type, so that a stray diameter also hears when it is not positive.
+	diameterOK := e.DiameterMM == nil || v.positive(field(p, "diameter_mm"), *e.DiameterMM)
+	v.need(p, ev, k.Fields, k.Noun)
+	if k.check != nil {
+		k.check(v, p, e, diameterOK)
+	}
+}
+
+// elementID checks that an id is non-empty, short, plain and not used before anywhere in the tree.
+func (v *checker) elementID(p, id string, firstUse map[string]string) {
 	ip := field(p, "id")
 	switch {
 	case id == "":
@@ -53,11 +93,15 @@ func (v *checker) elementID(p, id string, i int, firstUse map[string]int) {
 	case !plainName(id):
 		v.add(ip, "id %q may use only letters, digits, '-', '_' and '.'", id)
 	}
-	if j, dup := firstUse[id]; dup {
-		v.add(ip, "duplicate id %q: already used by elements[%d]", id, j)
+	if at, dup := firstUse[id]; dup {
+		if at == "" {
+			v.add(ip, "duplicate id %q: already the id of a source in more_sources", id)
+		} else {
+			v.add(ip, "duplicate id %q: already used by %s", id, at)
+		}
 		return
 	}
-	firstUse[id] = i
+	firstUse[id] = p
 }
 
 func (v *checker) lens(p string, e *Element, diameterOK bool) {

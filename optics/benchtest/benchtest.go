@@ -62,6 +62,7 @@ func EveryField(sourceKind string) *optics.Bench {
 		b.Source = optics.ChangeSourceKind(b.Source, sourceKind)
 	}
 	fillAll(&b.Source, optics.SourceKindOrFirst(sourceKind).Fields)
+	fillAll(&b.Source, optics.SourceFields)
 	for _, k := range optics.Kinds {
 		e := optics.DefaultElement(k.Type)
 		e.ID = optics.UniqueID(b, k.Type)
@@ -69,16 +70,47 @@ func EveryField(sourceKind string) *optics.Bench {
 		fillAll(&e, k.Fields)
 		b.Elements = append(b.Elements, e)
 	}
+	addBranches(b)
 	if err := optics.Validate(b); err != nil {
 		panic(fmt.Sprintf("benchtest: the bench with every field is invalid: %v", err))
 	}
 	return b
 }
 
-// fillAll gives each of fields that obj leaves empty a plain value of its quantity.
+// addBranches gives the bench what a branching bench has beyond one element of each type: a
+// reflected list on the splitter, a dichroic splitter, a same_as pass through the aperture and a
+// further source with its own list.
+func addBranches(b *optics.Bench) {
+	for i := range b.Elements {
+		if e := &b.Elements[i]; e.Type == optics.TypeSplitter {
+			e.Reflected = []optics.Element{{ID: "S9", Type: optics.TypeScreen, GapMM: 40}}
+		}
+	}
+	var aperture string
+	for _, e := range b.Elements {
+		if e.Type == optics.TypeAperture {
+			aperture = e.ID
+		}
+	}
+	b.Elements = append(b.Elements,
+		optics.Element{ID: "BS8", Type: optics.TypeSplitter, GapMM: 30, TurnDeg: new(-90.0), DiameterMM: new(25.4),
+			Dichroic: &optics.Dichroic{EdgeNM: 800, Reflects: optics.ReflectsShorter}},
+		optics.Element{ID: "A9", Type: optics.TypeAperture, GapMM: 20, SameAs: aperture})
+	more := optics.MoreSource{ID: "laser2", Source: b.Source, WavelengthsNM: []float64{532},
+		Elements: []optics.Element{{ID: "D9", Type: optics.TypeDump, GapMM: 60}}}
+	more.YMM += 100
+	b.MoreSources = []optics.MoreSource{more}
+}
+
+// fillAll gives each of fields that obj leaves empty a plain value of its quantity, and a plate
+// material its medium (the one text field a kind has).
 func fillAll(obj any, fields []optics.Field) {
 	for _, f := range fields {
 		switch p := f.In(obj).(type) {
+		case *string:
+			if *p == "" && !f.Selects && !f.Required {
+				*p = "fused-silica"
+			}
 		case **float64:
 			if *p == nil {
 				*p = new(sample(f))
@@ -101,7 +133,7 @@ func sample(f optics.Field) float64 {
 	case optics.Wavelength:
 		return 1000
 	}
-	return 0.5
+	return 0.25 // not a default (a splitter's reflect is 0.5 when absent)
 }
 
 // Change is a bench with one field changed alone.
@@ -110,6 +142,7 @@ type Change struct {
 	Key     string        // the field's JSON name
 	In      reflect.Type  // the object type that has the field: optics.Element, optics.Beam, ...
 	Removed bool          // the optional field was removed rather than given another value
+	Breaks  bool          // the change breaks a same_as reference (a pass's or its part's id, type or same_as): the bench is invalid
 	Bench   *optics.Bench // the changed bench; the one Changes was given is left as it was
 }
 
@@ -154,18 +187,26 @@ func (p place) entry(key string) place {
 }
 
 type changer struct {
-	orig *optics.Bench
-	in   reflect.Type // the object being walked
-	out  []Change
+	orig   *optics.Bench
+	in     reflect.Type // the object being walked
+	linked bool         // the element being walked is a same_as pass or a part one names
+	out    []Change
 }
 
 // walk visits the fields of the struct v at path, which at finds in a copy of the bench.
 func (c *changer) walk(path string, v reflect.Value, at place) {
-	outer := c.in
+	outer, outerLinked := c.in, c.linked
 	c.in = v.Type()
-	defer func() { c.in = outer }()
+	if e, ok := v.Addr().Interface().(*optics.Element); ok {
+		c.linked = e.SameAs != "" || named(c.orig)[e.ID]
+	}
+	defer func() { c.in, c.linked = outer, outerLinked }()
 	fields := optics.FieldsOf(v.Addr().Interface())
 	for i := range v.NumField() {
+		if sf := v.Type().Field(i); sf.Anonymous { // a further source's inline source fields
+			c.walk(path, v.Field(i), at.field(i))
+			continue
+		}
 		key := jsonKey(v.Type().Field(i))
 		f, _ := optics.FieldByKey(fields, key)
 		if f.Selects {
@@ -250,13 +291,39 @@ func (c *changer) object(path string, f optics.Field, v reflect.Value, at place)
 	}
 }
 
-// text changes a string field: a grid becomes another grid, any other text gets a letter more.
+// text changes a string field: a grid or a dichroic's side becomes another, a plate material
+// another medium, any other text gets a letter more. Text that is not given stays so.
 func (c *changer) text(path string, f optics.Field, at place, x string) {
-	if f.Key == "grid" {
+	switch {
+	case x == "" && !f.Required:
+	case f.Key == "grid":
 		c.set(path, f, at, other([]string{optics.GridMetric25, optics.GridImperial1, optics.GridNone}, x))
-		return
+	case f.Key == "reflects":
+		c.set(path, f, at, other([]string{optics.ReflectsShorter, optics.ReflectsLonger}, x))
+	case f.Key == "material":
+		c.set(path, f, at, other([]string{"water", "fused-silica"}, x))
+	default:
+		c.set(path, f, at, x+"x")
 	}
-	c.set(path, f, at, x+"x")
+}
+
+// named is the set of ids that same_as passes of b name.
+func named(b *optics.Bench) map[string]bool {
+	out := map[string]bool{}
+	var visit func(els []optics.Element)
+	visit = func(els []optics.Element) {
+		for _, e := range els {
+			if e.SameAs != "" {
+				out[e.SameAs] = true
+			}
+			visit(e.Reflected)
+		}
+	}
+	visit(b.Elements)
+	for _, m := range b.MoreSources {
+		visit(m.Elements)
+	}
+	return out
 }
 
 // set adds the change that gives the field at at the value x.
@@ -275,7 +342,8 @@ func (c *changer) remove(path string, f optics.Field, at place) {
 func (c *changer) change(path string, f optics.Field, removed bool, edit func(b *optics.Bench)) {
 	b := deepCopy(c.orig)
 	edit(b)
-	c.out = append(c.out, Change{Path: path, Key: f.Key, In: c.in, Removed: removed, Bench: b})
+	breaks := c.linked && (f.Key == "id" || f.Key == "type" || f.Key == "same_as")
+	c.out = append(c.out, Change{Path: path, Key: f.Key, In: c.in, Removed: removed, Breaks: breaks, Bench: b})
 }
 
 // other is the first of names that is not name.
