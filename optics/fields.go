@@ -215,7 +215,7 @@ var (
 	}
 	// MoreSourceFields are every key of a further source: its own and then the source's.
 	MoreSourceFields = union(moreSourceOwnFields, allSourceFields)
-	MountFields = []Field{
+	MountFields      = []Field{
 		{Key: "width_mm", Label: "mount width (empty: by type)", Quantity: Length, Required: true},
 		{Key: "depth_mm", Label: "mount depth", Quantity: Length, Required: true},
 	}

@@ -34,11 +34,8 @@ func elementLists(b *Bench) []elementList {
 		out = append(out, l)
 		for i := range *l.Els {
 			e := &(*l.Els)[i]
-			if len(e.Reflected) == 0 && e.Type != TypeSplitter {
-				continue
-			}
-			if e.Type != TypeSplitter || l.Depth >= MaxArmDepth+1 {
-				continue // Validate reports a reflected list on another type, or too deep
+			if len(e.Reflected) == 0 || e.Type != TypeSplitter || l.Depth > MaxArmDepth {
+				continue // Validate reports a reflected list on another type, or nested too deep
 			}
 			p := index(l.Path, i)
 			visit(elementList{Path: field(p, "reflected"), Els: &e.Reflected, Arm: e.ID + ".reflected",

@@ -98,11 +98,7 @@ func sourceAxis(s *Source, tableHeight float64, nWavelengths int) axis {
 	if s.HeightMM != nil {
 		h = *s.HeightMM
 	}
-	power := make([]float64, nWavelengths)
-	for i := range power {
-		power[i] = 1
-	}
-	return axis{Pos: r2.Vec{X: s.XMM, Y: s.YMM}, Dir: unitDeg(s.HeadingDeg), HeightMM: h, Power: power}
+	return axis{Pos: r2.Vec{X: s.XMM, Y: s.YMM}, Dir: unitDeg(s.HeadingDeg), HeightMM: h, Power: ones(nWavelengths)}
 }
 
 // moreSourceWavelengths are a further source's wavelengths: its own, or the bench's.
@@ -165,7 +161,7 @@ func (w *treeWalk) step(b *Bench, path string, e *Element, a axis, wavelengths [
 			refl.Dir = reflectDir(a.Dir, first.normal)
 			v.TurnDeg = turnBetween(a.Dir, refl.Dir)
 		}
-		v.Out.Power, refl.Power = splitPower(b, p, a.Power, wavelengths)
+		v.Out.Power, refl.Power = splitPower(p, a.Power, wavelengths)
 		v.Refl = &refl
 	case TypePeriscope:
 		rise, turn := deref(p.RiseMM), deref(p.TurnDeg)
@@ -192,7 +188,7 @@ func listWavelengths(b *Bench, l elementList) []float64 {
 
 // splitPower divides the power at each wavelength between a splitter's ports: by its reflect
 // fraction, or for a dichroic wholly to the port its side of the edge goes to.
-func splitPower(b *Bench, s *Element, in []float64, wavelengths []float64) (transmitted, reflected []float64) {
+func splitPower(s *Element, in []float64, wavelengths []float64) (transmitted, reflected []float64) {
 	transmitted, reflected = make([]float64, len(in)), make([]float64, len(in))
 	for k, p := range in {
 		r := DefaultReflect
