@@ -34,15 +34,23 @@ func DefaultSource(kind string) Source {
 }
 
 // UniqueID returns the first of L1, L2, ... (the type's IDPrefix, E for an unknown type) that no
-// element of b uses.
+// element of b's tree and no further source uses.
 func UniqueID(b *Bench, typ string) string {
-	used := map[string]bool{}
-	for _, e := range b.Elements {
-		used[e.ID] = true
-	}
 	prefix := "E"
 	if k, ok := KindOf(typ); ok {
 		prefix = k.IDPrefix
+	}
+	return firstFree(b, prefix)
+}
+
+// firstFree is the first of prefix1, prefix2, ... that no element or further source of b uses.
+func firstFree(b *Bench, prefix string) string {
+	used := map[string]bool{}
+	for _, pe := range treeElements(b) {
+		used[pe.E.ID] = true
+	}
+	for _, m := range b.MoreSources {
+		used[m.ID] = true
 	}
 	for n := 1; ; n++ {
 		if id := prefix + strconv.Itoa(n); !used[id] {
