@@ -6,7 +6,7 @@ import (
 
 // armReports gives each arm its part of the report: its own elements, the rays and beam of its
 // linear bench, and its optical path and group delay from the source to its last element.
-func armReports(arms []optics.Arm, full []*optics.Report) []optics.ArmReport {
+func armReports(arms []optics.Arm, full []*optics.Report, lengths []*pathLengths) []optics.ArmReport {
 	out := make([]optics.ArmReport, len(arms))
 	for i, a := range arms {
 		fr := full[i]
@@ -25,8 +25,7 @@ func armReports(arms []optics.Arm, full []*optics.Report) []optics.ArmReport {
 			ar.Parent = ptr2(a.Parent)
 		}
 		if n := len(fr.Elements); n > 0 {
-			pl := newPathLengths(a.Bench)
-			opt, grp := pl.to(fr.Elements[n-1].PathMM)
+			opt, grp := lengths[i].to(fr.Elements[n-1].PathMM)
 			ar.OpticalPathMM, ar.GroupDelayPS = opt, delayPS(grp)
 		}
 		out[i] = ar

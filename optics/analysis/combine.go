@@ -41,7 +41,7 @@ func combineArms(b *optics.Bench, arms []optics.Arm, r *optics.Report) {
 	var planWarnings []optics.Warning
 	r.Placement, planWarnings = layout.PlanArms(in, joins)
 	r.Warnings = append(warns, planWarnings...)
-	r.Board = layout.NewBoard(b.Table, b.Source, r)
+	r.Board.Mounts = layout.BoardMounts(r.Placement)
 }
 
 func withoutLayout(ws []optics.Warning) []optics.Warning {

@@ -22,7 +22,7 @@ type pass struct {
 // lists more than once in all (two arms, or one arm twice). A branch's first pass (the splitter
 // reflecting into it) is the same arrival as its parent's and does not count as a second beam,
 // but its leaving beam may leave together with another.
-func meetings(arms []optics.Arm, full []*optics.Report) []optics.Meeting {
+func meetings(arms []optics.Arm, full []*optics.Report, lengths []*pathLengths) []optics.Meeting {
 	var order []string
 	passes := map[string][]pass{}
 	for ai, a := range arms {
@@ -44,7 +44,7 @@ func meetings(arms []optics.Arm, full []*optics.Report) []optics.Meeting {
 			}
 		}
 		if arrivals >= 2 {
-			out = append(out, meeting(id, ps, arms, full))
+			out = append(out, meeting(id, ps, arms, full, lengths))
 		}
 	}
 	return out
@@ -52,7 +52,7 @@ func meetings(arms []optics.Arm, full []*optics.Report) []optics.Meeting {
 
 func place(full []*optics.Report, p pass) optics.ElementPlace { return full[p.arm].Elements[p.j] }
 
-func meeting(id string, ps []pass, arms []optics.Arm, full []*optics.Report) optics.Meeting {
+func meeting(id string, ps []pass, arms []optics.Arm, full []*optics.Report, lengths []*pathLengths) optics.Meeting {
 	at := partPlace(id, ps, full)
 	m := optics.Meeting{Part: id, TableXMM: at.TableXMM, TableYMM: at.TableYMM}
 	seen := map[int]bool{}
@@ -75,8 +75,8 @@ func meeting(id string, ps []pass, arms []optics.Arm, full []*optics.Report) opt
 	if arms[one.arm].Source != arms[two.arm].Source {
 		return m
 	}
-	oa, ga := newPathLengths(arms[one.arm].Bench).to(a.PathMM)
-	ob, gb := newPathLengths(arms[two.arm].Bench).to(b.PathMM)
+	oa, ga := lengths[one.arm].to(a.PathMM)
+	ob, gb := lengths[two.arm].to(b.PathMM)
 	m.OPDMM = ptr(ob - oa)
 	m.GroupDelayFS = ptr(1000 * delayPS(gb-ga))
 	if v, ok := visibility(a, b, full[one.arm].Beam, full[two.arm].Beam, angle); ok {

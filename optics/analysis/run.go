@@ -31,23 +31,28 @@ func RunValid(b *optics.Bench) *optics.Report {
 func runArms(b *optics.Bench, arms []optics.Arm) *optics.Report {
 	full := make([]*optics.Report, len(arms))
 	for i := range arms {
-		full[i] = linear(arms[i].Bench, i == 0)
+		full[i] = linear(arms[i].Bench, i == 0, len(arms) == 1)
 	}
 	r := full[0]
 	r.ArmFull = full
 	if len(arms) > 1 {
 		combineArms(b, arms, r)
 	}
-	r.Arms = armReports(arms, full)
-	r.Meetings = meetings(arms, full)
+	lengths := make([]*pathLengths, len(arms))
+	for i := range arms {
+		lengths[i] = newPathLengths(arms[i].Bench)
+	}
+	r.Arms = armReports(arms, full, lengths)
+	r.Meetings = meetings(arms, full, lengths)
 	r.Warnings = append(r.Warnings, armWarnings(arms, r)...)
 	r.Board.Arms = boardArms(arms, r)
 	return r
 }
 
 // linear computes the report of one linear bench: a bench that does not branch, or one arm's.
-// The spacing tolerances, costly and about the main line, are computed only when main is set.
-func linear(b *optics.Bench, main bool) *optics.Report {
+// The spacing tolerances, costly and about the main line, are computed only when main is set; the
+// placement and layout checks only when plan is (a branching bench runs them over all its arms).
+func linear(b *optics.Bench, main, plan bool) *optics.Report {
 	p := optics.BuildPath(b)
 	r := &optics.Report{
 		Format:        optics.FormatReportV1,
@@ -81,7 +86,9 @@ func linear(b *optics.Bench, main bool) *optics.Report {
 
 	r.Holes = layout.Holes(b.Table).HoleGrid
 	var planWarnings []optics.Warning
-	r.Placement, planWarnings = layout.Plan(b, r.Elements, beamRadius(r, b))
+	if plan {
+		r.Placement, planWarnings = layout.Plan(b, r.Elements, beamRadius(r, b))
+	}
 	r.Board = layout.NewBoard(b.Table, b.Source, r)
 	r.Warnings = append(r.Warnings, planWarnings...)
 	r.Warnings = append(r.Warnings, screenWarnings(b, r)...)
