@@ -31,8 +31,8 @@ func chain(prefix string, n int) []optics.Element {
 
 func benchOf(es []optics.Element) *optics.Bench {
 	return &optics.Bench{Format: optics.FormatBenchV1, WavelengthsNM: []float64{632.8, 532},
-		Table:  optics.Table{Grid: optics.GridMetric25, WidthMM: 900, DepthMM: 600, BeamHeightMM: 75},
-		Source: optics.Source{XMM: 450, YMM: 300, Kind: optics.SourceCollimated, SemiDiameterMM: f64(2), FieldAnglesDeg: []float64{0, 0.5}, Beam: &optics.Beam{WaistRadiusMM: 1}},
+		Table:    optics.Table{Grid: optics.GridMetric25, WidthMM: 900, DepthMM: 600, BeamHeightMM: 75},
+		Source:   optics.Source{XMM: 450, YMM: 300, Kind: optics.SourceCollimated, SemiDiameterMM: f64(2), FieldAnglesDeg: []float64{0, 0.5}, Beam: &optics.Beam{WaistRadiusMM: 1}},
 		Elements: es}
 }
 

@@ -55,18 +55,7 @@ func withoutLayout(ws []optics.Warning) []optics.Warning {
 }
 
 // appendNew appends the warnings not already in warns.
-func appendNew(warns []optics.Warning, more ...optics.Warning) []optics.Warning {
-next:
-	for _, w := range more {
-		for _, have := range warns {
-			if have.Code == w.Code && have.Element == w.Element && have.Message == w.Message {
-				continue next
-			}
-		}
-		warns = append(warns, w)
-	}
-	return warns
-}
+var appendNew = layout.AppendNewWarnings
 
 // missLimitMM is the largest miss of a same_as pass from its part that goes without a warning.
 const missLimitMM = 0.5

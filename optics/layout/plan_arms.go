@@ -67,7 +67,7 @@ func PlanArms(arms []ArmPlaces, joins []bool) ([]optics.Placement, []optics.Warn
 		if (ai < len(joins) && joins[ai]) || (n > 0 && isSplitterPart(a, n-1, index, union)) {
 			continue
 		}
-		warns = appendNewWarnings(warns, beamEnd(a.Bench)...)
+		warns = AppendNewWarnings(warns, beamEnd(a.Bench)...)
 	}
 	return placementsOf(union, places, fps), warns
 }
@@ -97,8 +97,8 @@ func isSplitterPart(a ArmPlaces, j int, index map[string]int, union *optics.Benc
 	return ok && union.Elements[u].Type == optics.TypeSplitter
 }
 
-// appendNewWarnings appends the warnings that are not already in warns.
-func appendNewWarnings(warns []optics.Warning, more ...optics.Warning) []optics.Warning {
+// AppendNewWarnings appends the warnings that are not already in warns.
+func AppendNewWarnings(warns []optics.Warning, more ...optics.Warning) []optics.Warning {
 next:
 	for _, w := range more {
 		for _, have := range warns {
