@@ -29,6 +29,23 @@ type Board struct {
 	// Elements has one entry per report element, Mounts one per placement, in the same order.
 	Elements []BoardElement
 	Mounts   []BoardMount
+	// Arms is every arm of the bench, the main one first, index-aligned with Report.Arms; a bench
+	// that does not branch has its main line alone.
+	Arms []BoardArm
+}
+
+// BoardArm is one arm on the table. Path, TailDir and Band run from the arm's source like the
+// main line's (so a branch repeats the stretch it shares with its parent); Elements holds the
+// arm's own elements, index-aligned with ArmReport.Elements. Open arms end in a stray beam, drawn
+// running on along TailDir.
+type BoardArm struct {
+	ID        string
+	SourceDir r2.Vec
+	Path      []PathNode
+	TailDir   r2.Vec
+	Band      [][]r2.Vec
+	Elements  []BoardElement
+	Open      bool
 }
 
 // SizeKnown reports whether the table has a size to draw.

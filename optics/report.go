@@ -20,8 +20,13 @@ type Report struct {
 	Holes         HoleGrid       `json:"holes"`
 	Placement     []Placement    `json:"placement,omitempty"`
 	Warnings      []Warning      `json:"warnings"`
-	Arms          []ArmReport    `json:"arms,omitempty"`     // every arm, the main one first (branching benches)
-	Meetings      []Meeting      `json:"meetings,omitempty"` // parts that two or more beams reach
+	Arms          []ArmReport    `json:"arms"`     // every arm, the main one first; one for a bench that does not branch
+	Meetings      []Meeting      `json:"meetings"` // parts that two or more beams reach; empty for a bench that does not branch
+
+	// ArmFull is, index-aligned with Arms, the complete report of each arm's linear bench (its
+	// elements from the source, rays, beam and system values) for drawing one arm from the side.
+	// For a bench that does not branch ArmFull[0] is the report itself. Not in the JSON.
+	ArmFull []*Report `json:"-"`
 
 	// Spacing says how tightly each gap must be held, one row per element up to the element the
 	// image is looked at (see SpacingTolerance); SpacingBasis is the allowance it is measured
@@ -92,6 +97,7 @@ type ElementPlace struct {
 	TableYMM       float64     `json:"table_y_mm"`
 	HeadingInDeg   float64     `json:"heading_in_deg"`
 	HeadingOutDeg  float64     `json:"heading_out_deg"`
+	HeightMM       float64     `json:"height_mm"`          // beam height above the table at the first vertex
 	SemiDiameterMM *float64    `json:"semi_diameter_mm"`   // null when unlimited
 	FocalMM        *float64    `json:"focal_mm,omitempty"` // thin lenses
 	Faces          []FacePlace `json:"faces"`

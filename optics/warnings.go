@@ -22,6 +22,9 @@ const (
 	WarnOffTable            WarningCode = "off-table"
 	WarnBeamOffTable        WarningCode = "beam-off-table"
 	WarnNoBeamEnd           WarningCode = "no-beam-end"
+	WarnOpenPort            WarningCode = "open-port"
+	WarnMissesPart          WarningCode = "misses-part"
+	WarnImageRotated        WarningCode = "image-rotated"
 )
 
 // WarningCodes is every code with what it means, in the order the README lists them.
@@ -45,6 +48,9 @@ var WarningCodes = []struct {
 	{WarnOffTable, "an element or its mount lies off the table"},
 	{WarnBeamOffTable, "a stretch of the beam leaves the table"},
 	{WarnNoBeamEnd, "the path does not end on a screen or dump"},
+	{WarnOpenPort, "a splitter's port sends light that no element takes and that joins no other beam: a stray beam; the message gives its share of the source's power"},
+	{WarnMissesPart, "a same_as pass arrives more than 0.5 mm from its part, on the table or in height; `others` names the part"},
+	{WarnImageRotated, "a periscope turns the beam by an angle that is not a multiple of 90°: the image is rotated, the exact trace is right, the paraxial and beam values downstream are in the rotated planes"},
 }
 
 // Meaning says what the code means; "" for a code that is not in WarningCodes.

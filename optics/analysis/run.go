@@ -20,7 +20,39 @@ func Run(b *optics.Bench) (*optics.Report, error) {
 // RunValid computes the report of a bench that Validate (or Decode) has already accepted, without
 // checking the rules a second time. Anything else must go through Run: the computations assume
 // every rule holds.
+//
+// Every arm of the bench (optics.ResolveArms) is computed on its own linear bench; the main arm
+// gives every value of a bench that does not branch, so such a bench reports exactly as before.
 func RunValid(b *optics.Bench) *optics.Report {
+	return runArms(b, optics.ResolveArms(b))
+}
+
+// runArms is RunValid over arms that the caller has resolved (the tests build some by hand).
+func runArms(b *optics.Bench, arms []optics.Arm) *optics.Report {
+	full := make([]*optics.Report, len(arms))
+	for i := range arms {
+		full[i] = linear(arms[i].Bench, i == 0, len(arms) == 1)
+	}
+	r := full[0]
+	r.ArmFull = full
+	if len(arms) > 1 {
+		combineArms(b, arms, r)
+	}
+	lengths := make([]*pathLengths, len(arms))
+	for i := range arms {
+		lengths[i] = newPathLengths(arms[i].Bench)
+	}
+	r.Arms = armReports(arms, full, lengths)
+	r.Meetings = meetings(arms, full, lengths)
+	r.Warnings = append(r.Warnings, armWarnings(arms, r)...)
+	r.Board.Arms = boardArms(arms, r)
+	return r
+}
+
+// linear computes the report of one linear bench: a bench that does not branch, or one arm's.
+// The spacing tolerances, costly and about the main line, are computed only when main is set; the
+// placement and layout checks only when plan is (a branching bench runs them over all its arms).
+func linear(b *optics.Bench, main, plan bool) *optics.Report {
 	p := optics.BuildPath(b)
 	r := &optics.Report{
 		Format:        optics.FormatReportV1,
@@ -33,12 +65,15 @@ func RunValid(b *optics.Bench) *optics.Report {
 	tan := paraxial.Analyze(b, p, 0, paraxial.Tangential)
 	sag := paraxial.Analyze(b, p, 0, paraxial.Sagittal)
 	r.System = systemValues(p, tan.Values, sag.Values)
-	r.Spacing, r.SpacingBasis = SpacingTolerances(b, p, tan)
+	if main {
+		r.Spacing, r.SpacingBasis = SpacingTolerances(b, p, tan)
+	}
 	for k := range b.WavelengthsNM {
 		r.Chromatic = append(r.Chromatic, paraxial.Cardinals(p, k, paraxial.Tangential, &b.Source))
 	}
 
 	r.Elements = layout.Walk(b)
+	fillHeights(r.Elements, b)
 	fillElements(r.Elements, b, p, tan)
 	var rayWarnings []optics.Warning
 	r.Rays, rayWarnings = traceRays(b, p, r.Elements)
@@ -51,7 +86,9 @@ func RunValid(b *optics.Bench) *optics.Report {
 
 	r.Holes = layout.Holes(b.Table).HoleGrid
 	var planWarnings []optics.Warning
-	r.Placement, planWarnings = layout.Plan(b, r.Elements, beamRadius(r, b))
+	if plan {
+		r.Placement, planWarnings = layout.Plan(b, r.Elements, beamRadius(r, b))
+	}
 	r.Board = layout.NewBoard(b.Table, b.Source, r)
 	r.Warnings = append(r.Warnings, planWarnings...)
 	r.Warnings = append(r.Warnings, screenWarnings(b, r)...)

@@ -32,12 +32,18 @@ func NewBoard(t optics.Table, s optics.Source, r *optics.Report) *optics.Board {
 		}
 		b.Elements[i] = be
 	}
-	b.Mounts = make([]optics.BoardMount, len(r.Placement))
-	for i, p := range r.Placement {
-		post := r2.Vec{X: p.TableXMM, Y: p.TableYMM}
-		b.Mounts[i] = optics.BoardMount{Post: post, Corners: rectangle(post, p.HeadingDeg, p.MountWidthMM, p.MountDepthMM)}
-	}
+	b.Mounts = BoardMounts(r.Placement)
 	return b
+}
+
+// BoardMounts is each placement's footprint on the table, in the same order.
+func BoardMounts(ps []optics.Placement) []optics.BoardMount {
+	out := make([]optics.BoardMount, len(ps))
+	for i, p := range ps {
+		post := r2.Vec{X: p.TableXMM, Y: p.TableYMM}
+		out[i] = optics.BoardMount{Post: post, Corners: rectangle(post, p.HeadingDeg, p.MountWidthMM, p.MountDepthMM)}
+	}
+	return out
 }
 
 // across is the direction of an element's faces on the table: across the arriving beam, or along

@@ -14,6 +14,11 @@ func Build(r *optics.Report) *Report {
 		t.add(chromaticSection(r.Chromatic))
 	}
 	t.add(elementsSection(r.Elements))
+	if len(r.Arms) > 1 {
+		t.add(armsSection(r.Arms))
+		t.add(armElementsSection(r.Arms))
+		t.add(meetingsSection(r.Meetings))
+	}
 	if len(r.Spacing) > 0 {
 		t.add(spacingSection(r.Spacing, r.SpacingBasis))
 	}

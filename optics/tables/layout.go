@@ -50,6 +50,9 @@ const (
 	MMPerMM
 	RadPerMM // with SmallAngle cells: the page writes µrad per mm
 	Percent  // with Fraction cells: the page writes the sign in each cell, the compare page in the head
+	PS
+	FS
+	MRad
 )
 
 // unitWords spells each unit in each layout.
@@ -62,6 +65,9 @@ var unitWords = [...]Words{
 	MMPerMM:  {Page: "mm per mm", Text: "per mm", Compare: "mm per mm"},
 	RadPerMM: {Page: "µrad per mm", Text: "rad per mm", Compare: "µrad per mm"},
 	Percent:  {Compare: "%"},
+	PS:       same("ps"),
+	FS:       same("fs"),
+	MRad:     same("mrad"),
 }
 
 // In is u as layout l writes it; "" when l writes no unit.

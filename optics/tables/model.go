@@ -28,13 +28,16 @@ const (
 	Media        Name = "media"
 	Warnings     Name = "warnings"
 	WarningCount Name = "warning-count"
+	Arms         Name = "arms"
+	ArmElements  Name = "arm-elements"
+	Meetings     Name = "meetings"
 )
 
 // arrangement is each layout's order of sections. A section that has nothing to show for a
 // bench (no beam, one wavelength) is not built and so not shown.
 var arrangement = map[Layout][]Name{
-	Text:    {System, Chromatic, Elements, Spacing, Media, StoppedRays, Blur, Beam, Waists, Warnings},
-	Page:    {System, Chromatic, Elements, Spacing, RayStatus, Blur, Beam, Waists, Placement, Media},
+	Text:    {System, Chromatic, Elements, Arms, ArmElements, Meetings, Spacing, Media, StoppedRays, Blur, Beam, Waists, Warnings},
+	Page:    {System, Chromatic, Elements, Arms, ArmElements, Meetings, Spacing, RayStatus, Blur, Beam, Waists, Placement, Media},
 	Compare: {System, Elements, RayStatus, Blur, Spacing, Beam, Waists, Placement, WarningCount},
 }
 
