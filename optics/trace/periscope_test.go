@@ -165,9 +165,29 @@ func TestArmsElementsNaNFree(t *testing.T) {
 			}
 		}
 		for _, pl := range layout.Walk(armsBench(els...)) {
-			if math.IsNaN(pl.TableXMM+pl.TableYMM+pl.HeightMM+pl.PathMM) {
+			if math.IsNaN(pl.TableXMM + pl.TableYMM + pl.HeightMM + pl.PathMM) {
 				t.Fatalf("trial %d: NaN place %+v", trial, pl)
 			}
 		}
+	}
+}
+
+// Plates, thin splitters and periscopes keep the trace free of allocations per ray.
+func TestArmsTraceAllocatesNothing(t *testing.T) {
+	bs := optics.Element{ID: "BS2", Type: optics.TypeSplitter, GapMM: 20, TurnDeg: fp(-60), DiameterMM: fp(25)}
+	p := optics.BuildPath(armsBench(plateEl(20, 90, 3), periscopeEl(30, 60, 37), bs, mirrorEl(40, 300, 70), screenEl("S", 100)))
+	rays := benchRays(21)
+	buf := make([]Point, 0, len(p.Surfaces))
+	for _, s := range rays {
+		if r := Trace(p, 0, s, buf); r.Status != optics.RayOK {
+			t.Fatalf("ray %+v: %s (%s)", s, r.Status, r.Reason)
+		}
+	}
+	if allocs := testing.AllocsPerRun(100, func() {
+		for _, s := range rays {
+			Trace(p, 0, s, buf)
+		}
+	}); allocs != 0 {
+		t.Errorf("%g allocations per fan, want 0", allocs)
 	}
 }
