@@ -95,6 +95,7 @@ type ElementPlace struct {
 	PathMM         float64     `json:"path_mm"` // source to first vertex along the beam
 	TableXMM       float64     `json:"table_x_mm"`
 	TableYMM       float64     `json:"table_y_mm"`
+	HeightMM       float64     `json:"height_mm"` // beam height above the table at the first vertex
 	HeadingInDeg   float64     `json:"heading_in_deg"`
 	HeadingOutDeg  float64     `json:"heading_out_deg"`
 	HeightMM       float64     `json:"height_mm"`          // beam height above the table at the first vertex

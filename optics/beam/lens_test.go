@@ -146,7 +146,7 @@ func TestThickLens(t *testing.T) {
 		g := newGaussian(hene, 1)
 		sys := paraxial.Identity
 		for i := 0; i < 2; i++ {
-			sys = paraxial.Mul(paraxial.GapMatrix(p, i, 0), sys)
+			sys = paraxial.Mul(paraxial.GapMatrix(p, i, 0, paraxial.Tangential), sys)
 			sys = paraxial.Mul(paraxial.SurfaceMatrix(p, i, 0, paraxial.Tangential), sys)
 		}
 		q := applyABCD(sys, g.sourceQ(src.w0, src.at))

@@ -39,7 +39,7 @@ func trace(p *optics.Path, plane paraxial.Plane, q0 complex128) planeTrace {
 	t := planeTrace{start: q0, arrive: make([]complex128, len(p.Surfaces)), leave: make([]complex128, len(p.Surfaces))}
 	q := q0
 	for i := range p.Surfaces {
-		q = applyABCD(paraxial.GapMatrix(p, i, 0), q)
+		q = applyABCD(paraxial.GapMatrix(p, i, 0, plane), q)
 		t.arrive[i] = q
 		q = applyABCD(paraxial.SurfaceMatrix(p, i, 0, plane), q)
 		t.leave[i] = q
@@ -119,10 +119,13 @@ func elementRow(p *optics.Path, g gaussian, t, s *planeTrace, sp optics.Span) (o
 			continue
 		}
 		f := footprint{aMM: sf.SemiAperture, wtMM: g.radiusMM(t.arrive[i]), wsMM: g.radiusMM(s.arrive[i])}
-		if sf.Kind == optics.Reflecting {
-			// The beam meets the mirror obliquely: across the plane of incidence its footprint on
-			// the mirror is longer by 1/cos i, while the clear aperture is a circle on the mirror.
+		// A tilted surface meets the beam obliquely: across the plane of incidence its footprint
+		// on the surface is longer by 1/cos i, while the clear aperture is a circle on it.
+		if paraxial.IncidencePlane(sf, paraxial.Tangential) {
 			f.wtMM /= math.Cos(sf.IncidenceRad)
+		}
+		if paraxial.IncidencePlane(sf, paraxial.Sagittal) {
+			f.wsMM /= math.Cos(sf.IncidenceRad)
 		}
 		faces = append(faces, f)
 	}

@@ -79,7 +79,7 @@ func SafetyWarnings(b *optics.Bench, p *optics.Path) []optics.Warning {
 // (included), giving it just before and just after each surface's power.
 func traceRay(p *optics.Path, plane paraxial.Plane, r paraxial.Ray) (arrive, leave []paraxial.Ray) {
 	for i := range p.Surfaces {
-		r = paraxial.GapMatrix(p, i, 0).Apply(r)
+		r = paraxial.GapMatrix(p, i, 0, plane).Apply(r)
 		arrive = append(arrive, r)
 		r = paraxial.SurfaceMatrix(p, i, 0, plane).Apply(r)
 		leave = append(leave, r)

@@ -47,10 +47,20 @@ func Footprints(b *optics.Bench, places []optics.ElementPlace) []Footprint {
 		e, p := &b.Elements[i], places[i]
 		m := MountOf(e)
 		first := r2.Vec{X: p.TableXMM, Y: p.TableYMM}
-		center := along(first, p.HeadingInDeg, elementLength(e)/2)
+		center := along(first, p.HeadingInDeg, elementLength(b, e)/2)
 		axis := p.HeadingInDeg
-		if e.Type == optics.TypeMirror {
+		switch {
+		case e.Type == optics.TypeMirror:
 			axis = mirrorNormalDeg(p.HeadingInDeg, p.HeadingOutDeg)
+		case e.Type == optics.TypeSplitter:
+			// Midway along the plate, the mount square to the splitter's surface (a mirror's
+			// normal for its reflected port).
+			center = r2.Add(first, r2.Scale(0.5, elementRun(b, e, p.HeadingInDeg)))
+			if e.TurnDeg != nil {
+				axis = mirrorNormalDeg(p.HeadingInDeg, p.HeadingInDeg+*e.TurnDeg)
+			}
+		case e.Type == optics.TypePeriscope:
+			center = first
 		}
 		fps[i] = Footprint{Index: i, ID: e.ID, Type: e.Type, Center: center, WidthMM: m.WidthMM, DepthMM: m.DepthMM, AxisDeg: axis}
 		fps[i].Corners = rectangle(center, axis, m.WidthMM, m.DepthMM)

@@ -45,7 +45,7 @@ func Segments(b *optics.Bench, places []optics.ElementPlace) []Segment {
 		first := r2.Vec{X: p.TableXMM, Y: p.TableYMM}
 		add(Segment{FromIndex: prev.FromIndex, ToIndex: i, From: prev.From, To: p.ID,
 			Start: prev.End, End: first, StartPathMM: prev.EndPathMM, EndPathMM: p.PathMM})
-		length := elementLength(&b.Elements[i])
+		length := elementLength(b, &b.Elements[i])
 		last := lastVertex(b, p, i)
 		add(Segment{FromIndex: i, ToIndex: i, From: p.ID, To: p.ID,
 			Start: first, End: last, StartPathMM: p.PathMM, EndPathMM: p.PathMM + length})

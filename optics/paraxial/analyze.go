@@ -139,14 +139,27 @@ func limitingSurface(p *optics.Path, axial []Ray, plane Plane) (int, float64) {
 }
 
 // BeamSemiAperture is the largest ray height, measured across the beam in the given plane, that a
-// surface lets through. A mirror's clear aperture is measured on the mirror, perpendicular to its
-// normal; met at incidence i, a beam of half-width a·cos i in the plane of incidence (the
-// tangential plane) already spans it, since its footprint is stretched by 1/cos i along the tilt.
+// surface lets through. A tilted surface's clear aperture (a mirror's, a splitter's, a periscope
+// mirror's) is measured on the surface; met at incidence i, a beam of half-width a·cos i in the
+// plane of incidence already spans it, since its footprint is stretched by 1/cos i along the tilt.
 func BeamSemiAperture(s *optics.Surface, plane Plane) float64 {
-	if s.Kind == optics.Reflecting && plane == Tangential {
+	if IncidencePlane(s, plane) {
 		return s.SemiAperture * math.Cos(s.IncidenceRad)
 	}
 	return s.SemiAperture
+}
+
+// IncidencePlane reports whether the beam's plane is the plane of incidence of a tilted surface
+// s, the plane in which its footprint on s is stretched by 1/cos i: the table plane for mirrors
+// and splitters, the vertical plane for a periscope's mirrors (optics.Fold).
+func IncidencePlane(s *optics.Surface, plane Plane) bool {
+	if s.IncidenceRad == 0 {
+		return false
+	}
+	if s.Kind == optics.Fold {
+		return TablePlane(s, plane) == Sagittal
+	}
+	return TablePlane(s, plane) == Tangential
 }
 
 // largestField is the field of largest magnitude, with its sign: tan(angle) for a collimated

@@ -35,8 +35,10 @@ func (m Matrix) Array() [2][2]float64 { return [2][2]float64{{m.A, m.B}, {m.C, m
 // Ray is a paraxial ray: height y in mm and reduced slope n·u (u = dy/dz).
 type Ray struct{ Y, NU float64 }
 
-// Plane selects the tangential (table) plane or the sagittal (vertical) plane. They differ only at
-// tilted curved mirrors.
+// Plane selects the tangential or the sagittal plane of the beam: at the source the table plane
+// and the vertical plane. They differ at tilted curved mirrors and tilted plates. A periscope
+// turning by an odd multiple of 90° lays the beam's tangential plane vertical (Surface.Swapped);
+// the planes stay the beam's own, so there each surface gives it its vertical-plane action.
 type Plane int
 
 const (
@@ -54,6 +56,9 @@ func Transfer(d, n float64) Matrix { return Matrix{A: 1, B: d / n, D: 1} }
 // a lens of power 2c (c = 1/R, + concave); tilted by the angle of incidence i its tangential power
 // is 2c/cos i and its sagittal power 2c·cos i (Coddington's equations for a spherical mirror,
 // focal lengths f·cos i and f/cos i).
+//
+// The plane is the beam's; behind an odd number of 90° periscopes the mirror's table-plane power
+// falls in the beam's sagittal plane (see TablePlane).
 func Power(s *optics.Surface, nBefore, nAfter float64, plane Plane) float64 {
 	switch s.Kind {
 	case optics.Refracting:
@@ -65,7 +70,7 @@ func Power(s *optics.Surface, nBefore, nAfter float64, plane Plane) float64 {
 		return 1 / s.FocalMM
 	case optics.Reflecting:
 		cos := math.Cos(s.IncidenceRad)
-		if plane == Tangential {
+		if TablePlane(s, plane) == Tangential {
 			return 2 * s.Curvature / cos
 		}
 		return 2 * s.Curvature * cos
@@ -79,12 +84,42 @@ func SurfaceMatrix(p *optics.Path, i, k int, plane Plane) Matrix {
 	return Matrix{A: 1, C: -Power(s, p.IndexBefore(i, k), s.Index[k], plane), D: 1}
 }
 
+// TablePlane is the plane on the table that the beam's plane meets at surface s: Tangential for
+// the table plane, Sagittal for the vertical one. They are the same except where s.Swapped.
+func TablePlane(s *optics.Surface, plane Plane) Plane {
+	if s.Swapped {
+		return 1 - plane
+	}
+	return plane
+}
+
 // GapMatrix is the transfer from the vertex of surface i-1 (or the source, for i = 0) to the
-// vertex of surface i at wavelength index k.
-func GapMatrix(p *optics.Path, i, k int) Matrix {
+// vertex of surface i at wavelength index k, in the given plane: [1 GapReducedMM; 0 1].
+func GapMatrix(p *optics.Path, i, k int, plane Plane) Matrix {
+	s := &p.Surfaces[i]
+	if s.PlateMM > 0 {
+		return Matrix{A: 1, B: GapReducedMM(p, i, k, plane), D: 1}
+	}
 	z0 := 0.0
 	if i > 0 {
 		z0 = p.Surfaces[i-1].PathMM
 	}
-	return Transfer(p.Surfaces[i].PathMM-z0, p.IndexBefore(i, k))
+	return Transfer(s.PathMM-z0, p.IndexBefore(i, k))
+}
+
+// GapReducedMM is the reduced (air-equivalent) length of the stretch in front of surface i at
+// wavelength index k in the given plane: its length over its index, or, for the glass of a
+// tilted plate, PlateReducedMM at that wavelength's index (the plane of incidence is the table
+// plane).
+func GapReducedMM(p *optics.Path, i, k int, plane Plane) float64 {
+	s := &p.Surfaces[i]
+	n := p.IndexBefore(i, k)
+	if s.PlateMM > 0 {
+		return PlateReducedMM(s.PlateMM, n, s.IncidenceRad, TablePlane(s, plane))
+	}
+	z0 := 0.0
+	if i > 0 {
+		z0 = p.Surfaces[i-1].PathMM
+	}
+	return (s.PathMM - z0) / n
 }

@@ -1,6 +1,10 @@
 package paraxial
 
-import "math"
+import (
+	"math"
+
+	"raytable/optics"
+)
 
 // A plane-parallel plate of thickness t and index n, tilted so that the axis meets it at an angle
 // of incidence θ, does three things to a beam in air: it displaces the axis sideways, in the
@@ -17,16 +21,14 @@ import "math"
 // t sqrt(n²+1)/n⁴ (H. W. Kogelnik, E. P. Ippen, A. Dienes and C. V. Shank, IEEE J. Quantum
 // Electron. 8, 373, 1972, from memory).
 
-// PlateShiftMM is the sideways displacement d of the axis through a tilted plate.
+// PlateShiftMM is the sideways displacement d of the axis through a tilted plate (optics.PlateShiftMM).
 func PlateShiftMM(thicknessMM, n, incidenceRad float64) float64 {
-	s, c := math.Sincos(incidenceRad)
-	return thicknessMM * s * (1 - c/math.Sqrt(n*n-s*s))
+	return optics.PlateShiftMM(thicknessMM, n, incidenceRad)
 }
 
-// PlateGlassPathMM is the length t / cos θ' of the axis inside the plate.
+// PlateGlassPathMM is the length t / cos θ' of the axis inside the plate (optics.PlateGlassPathMM).
 func PlateGlassPathMM(thicknessMM, n, incidenceRad float64) float64 {
-	s := math.Sin(incidenceRad)
-	return thicknessMM * n / math.Sqrt(n*n-s*s)
+	return optics.PlateGlassPathMM(thicknessMM, n, incidenceRad)
 }
 
 // PlateReducedMM is the reduced length (the B of the plate's ABCD matrix) the plate adds in one

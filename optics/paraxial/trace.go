@@ -27,7 +27,11 @@ func TraceInto(dst []Ray, p *optics.Path, k int, plane Plane, start Ray) []Ray {
 	for i := range p.Surfaces {
 		s := &p.Surfaces[i]
 		nAfter := s.Index[k]
-		r.Y += (s.PathMM - zPrev) * r.NU / nPrev
+		if s.PlateMM > 0 {
+			r.Y += GapReducedMM(p, i, k, plane) * r.NU
+		} else {
+			r.Y += (s.PathMM - zPrev) * r.NU / nPrev
+		}
 		r.NU -= Power(s, nPrev, nAfter, plane) * r.Y
 		dst[i] = r
 		zPrev, nPrev = s.PathMM, nAfter
@@ -56,7 +60,7 @@ func systemWithBound(p *optics.Path, k int, plane Plane) (m, bound Matrix) {
 	m, bound = Identity, Identity
 	for i := first; i <= last; i++ {
 		if i > first {
-			g := GapMatrix(p, i, k)
+			g := GapMatrix(p, i, k, plane)
 			m, bound = Mul(g, m), Mul(abs(g), bound)
 		}
 		s := SurfaceMatrix(p, i, k, plane)

@@ -81,6 +81,25 @@ func Trace(p *optics.Path, k int, s Start, buf []Point) Result {
 			pos, dir = out, d
 
 		case optics.Refracting:
+			if sf.TiltRad != 0 || sf.AxisTurnRad != 0 {
+				hit, d, r, miss, ok := tiltedFace(p0, dir, sf, side, p.IndexBefore(i, k), sf.Index[k])
+				switch {
+				case miss != hitOK:
+					return stop(optics.RayMissed, missReason(sf, miss))
+				case r > sf.SemiAperture:
+					pts = append(pts, Point{Surface: i, Pos: hit, Dir: dir})
+					return stop(optics.RayClipped, clipReason(sf, r))
+				case !ok:
+					pts = append(pts, Point{Surface: i, Pos: hit, Dir: dir})
+					return stop(optics.RayTIR, "total internal reflection at "+where(sf))
+				}
+				pts = append(pts, Point{Surface: i, Pos: hit, Dir: d})
+				if d.Z <= 0 {
+					return stop(optics.RayMissed, "the ray leaves "+where(sf)+" backwards, against the path")
+				}
+				pos, dir = hit, d
+				continue
+			}
 			axis := r3.Vec{X: 0, Y: 0, Z: 1}
 			hit, miss := intersect(p0, dir, axis, sf.Curvature)
 			if miss != hitOK {
@@ -101,12 +120,16 @@ func Trace(p *optics.Path, k int, s Start, buf []Point) Result {
 			}
 			pos, dir = hit, d
 
-		default: // Thin and Plane: a flat plane at the vertex
+		default: // Thin, Plane and Fold: a flat plane at the vertex
 			hit, miss := intersect(p0, dir, r3.Vec{X: 0, Y: 0, Z: 1}, 0)
 			if miss != hitOK {
 				return stop(optics.RayMissed, missReason(sf, miss))
 			}
-			if r := math.Hypot(hit.X, hit.Y); r > sf.SemiAperture {
+			if sf.RotateRad != 0 {
+				// A periscope's second mirror: back into the frame of the new heading, X up.
+				hit, dir = rotateAbout(hit, side*sf.RotateRad), rotateAbout(dir, side*sf.RotateRad)
+			}
+			if r := onSurface(hit, sf); r > sf.SemiAperture {
 				pts = append(pts, Point{Surface: i, Pos: hit, Dir: dir})
 				return stop(optics.RayClipped, clipReason(sf, r))
 			}
@@ -138,8 +161,11 @@ func where(s *optics.Surface) string {
 
 func clipReason(s *optics.Surface, r float64) string {
 	from := "from the axis"
-	if s.Kind == optics.Reflecting {
+	switch {
+	case s.Kind == optics.Reflecting || s.Kind == optics.Fold:
 		from = "from the mirror's centre"
+	case s.IncidenceRad != 0:
+		from = "from the centre of the tilted surface"
 	}
 	return fmt.Sprintf("outside the %.2f mm clear diameter of %s (ray %.2f mm %s)", 2*s.SemiAperture, where(s), r, from)
 }
