@@ -98,7 +98,6 @@ type ElementPlace struct {
 	HeightMM       float64     `json:"height_mm"` // beam height above the table at the first vertex
 	HeadingInDeg   float64     `json:"heading_in_deg"`
 	HeadingOutDeg  float64     `json:"heading_out_deg"`
-	HeightMM       float64     `json:"height_mm"`          // beam height above the table at the first vertex
 	SemiDiameterMM *float64    `json:"semi_diameter_mm"`   // null when unlimited
 	FocalMM        *float64    `json:"focal_mm,omitempty"` // thin lenses
 	Faces          []FacePlace `json:"faces"`

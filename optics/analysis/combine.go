@@ -2,7 +2,6 @@ package analysis
 
 import (
 	"fmt"
-	"math"
 
 	"raytable/optics"
 	"raytable/optics/layout"
@@ -109,18 +108,16 @@ func openPort(a optics.Arm, ar optics.ArmReport, fr *optics.Report) (optics.Warn
 		"a stray beam with %s %% of the source's power leaves %s (arm %s) and meets nothing: end it on a dump", num(100*p), fr.Elements[n-1].ID, a.ID)}, true
 }
 
-// imageRotated warns of each periscope in an arm's own list whose turn is not a multiple of 90°:
-// the exact trace is right, but the paraxial and beam values are in planes the periscope rotated.
-//
-// The physics of periscopes may mark such a pass itself; this reads the rule off the bench until
-// it does.
+// imageRotated warns of each periscope in an arm's own list whose turn is not a multiple of 90°
+// (optics.PeriscopeQuarterTurns, the rule BuildPath applies): the exact trace is right, but the
+// paraxial and beam values are in planes the periscope rotated.
 func imageRotated(a optics.Arm) []optics.Warning {
 	var out []optics.Warning
 	for _, e := range a.Bench.Elements[min(a.Own, len(a.Bench.Elements)):] {
 		if e.Type != optics.TypePeriscope || e.TurnDeg == nil {
 			continue
 		}
-		if q := math.Mod(math.Abs(*e.TurnDeg), 90); q > 1e-9 && 90-q > 1e-9 {
+		if _, exact := optics.PeriscopeQuarterTurns(*e.TurnDeg); !exact {
 			out = append(out, optics.Warning{Code: optics.WarnImageRotated, Element: e.ID, Message: fmt.Sprintf(
 				"%s turns the beam by %s°, not a multiple of 90°: the image is rotated; the tangential and sagittal values downstream are in the rotated planes", e.ID, num(*e.TurnDeg))})
 		}

@@ -73,7 +73,6 @@ func linear(b *optics.Bench, main, plan bool) *optics.Report {
 	}
 
 	r.Elements = layout.Walk(b)
-	fillHeights(r.Elements, b)
 	fillElements(r.Elements, b, p, tan)
 	var rayWarnings []optics.Warning
 	r.Rays, rayWarnings = traceRays(b, p, r.Elements)
