@@ -29,6 +29,22 @@ type Board struct {
 	// Elements has one entry per report element, Mounts one per placement, in the same order.
 	Elements []BoardElement
 	Mounts   []BoardMount
+	// Arms has one entry per arm of a branching bench (Report.Arms), the main one first; empty
+	// for a bench that does not branch. Path, Band and Elements above stay the main line's.
+	Arms []BoardArm
+}
+
+// BoardArm is one arm on the table: its folded path and band from its source, and its own
+// elements, index-aligned with ArmReport.Elements of the same arm. Open: the arm ends in a stray
+// beam, drawn running on along TailDir.
+type BoardArm struct {
+	ID        string
+	SourceDir r2.Vec
+	Path      []PathNode
+	TailDir   r2.Vec
+	Band      [][]r2.Vec
+	Elements  []BoardElement
+	Open      bool
 }
 
 // SizeKnown reports whether the table has a size to draw.

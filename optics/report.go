@@ -31,6 +31,9 @@ type Report struct {
 
 	// Board is the table seen from above as the drawings show it (see Board); not in the JSON.
 	Board *Board `json:"-"`
+	// ArmFull is the complete report of each arm's linear bench, index-aligned with Arms, for the
+	// side view of one arm; for a v1 bench ArmFull[0] is the report itself. Not in the JSON.
+	ArmFull []*Report `json:"-"`
 }
 
 // MediumIndex is the index of one medium used on the bench at one wavelength.

@@ -32,4 +32,6 @@ type Meeting struct {
 	OPDMM        *float64 `json:"opd_mm"`         // optical path difference of those beams; same source only
 	GroupDelayFS *float64 `json:"group_delay_fs"` // their group delay difference
 	Visibility   *float64 `json:"visibility"`     // normalised overlap |γ| of their Gaussian beams at the part
+	TableXMM     float64  `json:"table_x_mm"`     // where the part stands on the table
+	TableYMM     float64  `json:"table_y_mm"`
 }
