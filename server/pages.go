@@ -36,7 +36,13 @@ func (s *Server) benchPage(w http.ResponseWriter, r *http.Request) {
 		return
 	}
 	paraxial := r.URL.Query().Get("paraxial") == "1"
-	res, err := s.revResult(d, view.PageDrawing.WithParaxial(paraxial))
+	rep, err := s.report(d)
+	if err != nil {
+		s.fail(w, r, err)
+		return
+	}
+	arm := view.KnownArm(rep, r.URL.Query().Get("arm"))
+	res, err := s.revResult(d, view.PageDrawing.WithParaxial(paraxial).WithArm(arm))
 	if err != nil {
 		s.fail(w, r, err)
 		return

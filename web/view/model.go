@@ -105,7 +105,8 @@ type Result struct {
 	SideSVG  string
 	TableSVG string
 	Numbers  Numbers
-	Problem  string // set when nothing could be computed
+	Problem  string    // set when nothing could be computed
+	Arms     []ArmLink // the arms the side view may show; none for a bench with one
 }
 
 // Links are the addresses of one revision's pages and exports.
