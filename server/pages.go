@@ -4,6 +4,7 @@ import (
 	"net/http"
 
 	"raytable/optics"
+	"raytable/server/demo"
 	"raytable/web/view"
 )
 
@@ -19,6 +20,9 @@ func (s *Server) renderHome(w http.ResponseWriter, r *http.Request, status int, 
 	if err != nil {
 		s.fail(w, r, err)
 		return
+	}
+	for _, st := range demo.Starts {
+		p.Starts = append(p.Starts, view.StartChoice{Action: "/demo/" + st.Name, Button: st.Button, About: st.About, TestID: "start-" + st.Name})
 	}
 	for _, rev := range revs {
 		p.Recent = append(p.Recent, view.Recent{

@@ -153,8 +153,14 @@ type Recent struct {
 	Summary string
 }
 
+// StartChoice is a bench the home page offers to start from: a button posting to Action.
+type StartChoice struct {
+	Action, Button, About, TestID string
+}
+
 // HomePage is the start page.
 type HomePage struct {
+	Starts      []StartChoice // the benches offered beside the demo
 	Recent      []Recent
 	ImportText  string   // what was pasted, kept after a failed import
 	ImportError []string // problems of a failed import
