@@ -44,15 +44,19 @@ func (t *tableScene) drawArmBeams(p *pen) {
 	defer p.gend()
 	for _, i := range arms {
 		ba, c := &t.board.Arms[i], t.armColor(i)
+		parentPath, parentBand := t.parentOf(i)
 		p.group(`class="arm"`, attr("data-arm", t.r.Arms[i].ID))
 		if t.r.Arms[i].Beam != nil {
 			for _, band := range ba.Band {
+				if containsOutline(parentBand, band) {
+					continue // the stretch it shares with its parent, drawn there
+				}
 				xs, ys := t.poly(band)
 				p.polygon(xs, ys, attr("fill", c), `fill-opacity="0.3"`, `stroke="none"`)
 			}
 		}
 		var path []r2.Vec
-		for _, n := range ba.Path {
+		for _, n := range ba.Path[sharedNodes(parentPath, ba.Path):] {
 			if finiteVec(n.At) {
 				path = append(path, n.At)
 			}
@@ -68,8 +72,57 @@ func (t *tableScene) drawArmBeams(p *pen) {
 	}
 }
 
+// parentOf is the path and band of arm i's parent (the main line's for the main arm and for an
+// arm the report names no parent of that is drawn).
+func (t *tableScene) parentOf(i int) ([]optics.PathNode, [][]r2.Vec) {
+	if p := t.r.Arms[i].Parent; p != nil {
+		for _, k := range t.branches() {
+			if t.r.Arms[k].ID == *p {
+				return t.board.Arms[k].Path, t.board.Arms[k].Band
+			}
+		}
+	}
+	if t.r.Arms[i].Parent == nil {
+		return nil, nil // a further source's own list shares nothing
+	}
+	return t.board.Path, t.board.Band
+}
+
+// sameMM is how close two points must be to count as one in the drawing.
+const sameMM = 1e-6
+
+// sharedNodes is the index of the last node where path still runs along parent from the start
+// (the node it leaves the parent at), so that the arm is drawn only from where it branches.
+func sharedNodes(parent, path []optics.PathNode) int {
+	k := 0
+	for k+1 < len(path) && k+1 < len(parent) && r2.Norm(r2.Sub(path[k+1].At, parent[k+1].At)) < sameMM {
+		k++
+	}
+	if len(parent) > 0 && len(path) > 0 && r2.Norm(r2.Sub(path[0].At, parent[0].At)) >= sameMM {
+		return 0
+	}
+	return k
+}
+
+// containsOutline reports whether outlines holds one equal to o, point by point.
+func containsOutline(outlines [][]r2.Vec, o []r2.Vec) bool {
+next:
+	for _, c := range outlines {
+		if len(c) != len(o) {
+			continue
+		}
+		for k := range c {
+			if r2.Norm(r2.Sub(c[k], o[k])) >= sameMM {
+				continue next
+			}
+		}
+		return true
+	}
+	return false
+}
+
 // drawStray draws a beam leaving an open port: dashed to the edge of the drawing, with a cross
-// where it leaves and the words "open port" beside its start.
+// where it leaves and the words "open port" beside it there.
 func (t *tableScene) drawStray(p *pen, from, dir r2.Vec, c string) {
 	if !finiteVec(dir) || r2.Norm(dir) == 0 {
 		return
@@ -81,8 +134,8 @@ func (t *tableScene) drawStray(p *pen, from, dir r2.Vec, c string) {
 		attr("stroke-dasharray", p.num(2*t.st.line)+" "+p.num(2*t.st.line)))
 	x, y := t.pt(end)
 	p.cross(x, y, 0.8*t.st.marker, `stroke="#c62828"`, attr("stroke-width", lw))
-	mid := r2.Add(from, r2.Scale(0.5*math.Min(r2.Norm(r2.Sub(end, from)), 60), dir))
-	mx, my := t.pt(r2.Add(mid, r2.Scale(1.2*t.st.font/t.st.s, perp(dir))))
+	back := math.Min(0.5*r2.Norm(r2.Sub(end, from)), 40)
+	mx, my := t.pt(r2.Sub(r2.Sub(end, r2.Scale(back, dir)), r2.Scale(0.9*t.st.font/t.st.s, perp(dir))))
 	p.text(mx, my, "open port", attr("font-size", p.num(0.9*t.st.font)), `fill="#c62828"`, `text-anchor="middle"`)
 }
 
@@ -163,7 +216,7 @@ func (t *tableScene) drawMeetings(p *pen) {
 		p.group(`class="meeting"`, attr("data-part", m.Part))
 		p.title(m.Part + ": " + meetingText(m))
 		p.circle(x, y, rad, `fill="none"`, `stroke="#6a1b9a"`, attr("stroke-width", p.num(1.5*t.st.line)))
-		p.text(x+rad+2, y+rad+t.st.font, meetingText(m), attr("font-size", p.num(t.st.font)), `fill="#6a1b9a"`, `font-weight="bold"`)
+		p.text(x+rad+2, y-rad-2, meetingText(m), attr("font-size", p.num(t.st.font)), `fill="#6a1b9a"`, `font-weight="bold"`)
 		p.gend()
 	}
 }

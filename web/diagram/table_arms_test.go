@@ -15,7 +15,7 @@ import (
 func armsReport() *optics.Report {
 	r := boarded(fixtureBench(), fixtureReport())
 	bd := r.Board
-	at := bd.Elements[1].At
+	at := bd.Path[2].At // the arm leaves the main line at its third node
 	up := r2.Vec{Y: 1}
 	m := r2.Add(at, r2.Scale(80, up))
 	parent := "main"
@@ -27,7 +27,7 @@ func armsReport() *optics.Report {
 	}
 	bd.Arms = []optics.BoardArm{
 		{ID: "main", Path: bd.Path, Elements: bd.Elements},
-		{ID: "BS1.reflected", Path: []optics.PathNode{{At: bd.Path[0].At}, {At: at}, {At: m}}, TailDir: r2.Vec{X: 1},
+		{ID: "BS1.reflected", Path: append(append([]optics.PathNode{}, bd.Path[:3]...), optics.PathNode{At: m}), TailDir: r2.Vec{X: 1},
 			Elements: []optics.BoardElement{{At: m, In: up, Across: r2.Vec{X: 1, Y: -1}}}, Open: true},
 	}
 	r.Meetings = []optics.Meeting{{Part: "MX", Arms: []string{"main", "BS1.reflected"}, OPDMM: &opd, TableXMM: m.X, TableYMM: m.Y}}
@@ -42,6 +42,22 @@ func TestTableDrawsArms(t *testing.T) {
 	}
 	if n := root.count("arm-elements", "polyline"); n != 1 {
 		t.Errorf("the arm's own mirror is drawn %d times, want once", n)
+	}
+	if path := arms[0].Children; len(path) == 0 {
+		t.Fatal("the arm draws nothing")
+	}
+	green := 0
+	for _, pl := range root.byClass("beam-path") {
+		if pl.attr("stroke") != WavelengthColor(532) {
+			continue
+		}
+		green++
+		if n := strings.Count(pl.attr("points"), ","); n != 2 {
+			t.Errorf("the arm's path has %d points; want 2, its own stretch from where it branches", n)
+		}
+	}
+	if green != 1 {
+		t.Errorf("%d paths in the arm's colour, want 1", green)
 	}
 	if len(root.byClass("stray-beam")) != 1 {
 		t.Error("the open port is not drawn running on")
