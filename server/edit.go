@@ -227,7 +227,7 @@ func (s *Server) preview(w http.ResponseWriter, r *http.Request) {
 			s.fail(w, r, err)
 			return
 		}
-		res = view.NewResult(rep, view.PageDrawing)
+		res = view.NewResult(rep, view.PageDrawing.WithArm(view.KnownArm(rep, r.URL.Query().Get("arm"))))
 	}
 	s.render(w, r, status, view.ResultFragment(res))
 }

@@ -117,3 +117,17 @@ func TestSourceButtons(t *testing.T) {
 		t.Errorf("delete-source:0: %v, %d left", ps, len(b.MoreSources))
 	}
 }
+
+// TestUnknownArmIsTheMainLine: a bench page or side view asked for an arm the bench does not have
+// shows the main line, exactly as without the question (the id keys no drawing of its own).
+func TestUnknownArmIsTheMainLine(t *testing.T) {
+	ts := newTestServer(t)
+	id := ts.startDemo(t)
+	for _, path := range []string{"/r/" + id, "/r/" + id + "/side.svg"} {
+		plain := ts.get(t, path)
+		asked := ts.get(t, path+"?arm=nowhere")
+		if plain.Code != http.StatusOK || asked.Code != http.StatusOK || plain.Body.String() != asked.Body.String() {
+			t.Errorf("%s?arm=nowhere: %d, and it differs from %s (%d)", path, asked.Code, path, plain.Code)
+		}
+	}
+}

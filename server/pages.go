@@ -2,6 +2,8 @@ package server
 
 import (
 	"net/http"
+	"net/url"
+	"strings"
 
 	"raytable/optics"
 	"raytable/server/demo"
@@ -51,7 +53,14 @@ func (s *Server) benchPage(w http.ResponseWriter, r *http.Request) {
 		s.fail(w, r, err)
 		return
 	}
-	p := s.benchPageModel(d, paraxial, buildForm(d.rev.ID, d.bench, benchValues(d.bench), nil), res)
+	form := buildForm(d.rev.ID, d.bench, benchValues(d.bench), nil)
+	if arm != "" { // previews while a slider moves keep showing this arm
+		form.PreviewURL += "?arm=" + url.QueryEscape(arm)
+	}
+	p := s.benchPageModel(d, paraxial, form, res)
+	if arm != "" {
+		p.Links.SideSVG = addQuery(p.Links.SideSVG, "arm="+url.QueryEscape(arm))
+	}
 	s.render(w, r, http.StatusOK, view.Bench(p))
 }
 
@@ -119,4 +128,12 @@ func (s *Server) history(w http.ResponseWriter, r *http.Request) {
 		cur = parent
 	}
 	s.render(w, r, http.StatusOK, view.History(p))
+}
+
+// addQuery appends one query parameter to a link that may have others.
+func addQuery(link, param string) string {
+	if strings.Contains(link, "?") {
+		return link + "&" + param
+	}
+	return link + "?" + param
 }

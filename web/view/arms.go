@@ -40,10 +40,10 @@ func KnownArm(r *optics.Report, id string) string {
 	return ""
 }
 
-// sideReport is the report the side view draws for arm id: that arm's complete report
+// SideReport is the report the side view draws for arm id: that arm's complete report
 // (Report.ArmFull) when the analysis gave one, else the report itself (the main line, as every
 // bench without arms has it).
-func sideReport(r *optics.Report, id string) *optics.Report {
+func SideReport(r *optics.Report, id string) *optics.Report {
 	i := armIndex(r, id)
 	if i < len(r.ArmFull) && r.ArmFull[i] != nil {
 		return r.ArmFull[i]

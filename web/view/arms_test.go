@@ -34,7 +34,7 @@ func TestArmChoice(t *testing.T) {
 		if got := KnownArm(r, c.ask); got != c.known {
 			t.Errorf("KnownArm(%q) = %q, want %q", c.ask, got, c.known)
 		}
-		if got := sideReport(r, c.ask); got != c.side {
+		if got := SideReport(r, c.ask); got != c.side {
 			t.Errorf("arm %q: the side view draws %q", c.ask, got.Title)
 		}
 		links := armLinks(r, c.ask)

@@ -66,7 +66,7 @@ func (o DrawOptions) Table() diagram.TableOptions {
 // The side view shows one arm (o.Arm; the main one by default) and the result lists the arms to
 // choose from.
 func NewResult(r *optics.Report, o DrawOptions) Result {
-	side := sideReport(r, o.Arm)
+	side := SideReport(r, o.Arm)
 	return Result{
 		SideSVG:  InlineSVG(diagram.Side(side, o.Side(side))),
 		TableSVG: InlineSVG(diagram.Table(r, o.Table())),
