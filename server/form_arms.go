@@ -19,17 +19,19 @@ func (fb *formBuilder) elementForms(list string, es []optics.Element) []view.Ele
 	out := make([]view.ElementForm, 0, len(es))
 	for i, e := range es {
 		path := fmt.Sprintf("%s[%d]", list, i)
+		// The nested list first, so that a problem inside it that no input takes is shown in its
+		// own group rather than the splitter's.
+		var arms []view.ArmForm
+		if e.Type == optics.TypeSplitter {
+			arms = append(arms, fb.armForm(path+".reflected", "Reflected arm of "+nonEmpty(e.ID, "this splitter"), e.Reflected))
+		}
 		g := fb.group(elementTitle(i, e), "element", path, elementSpecs(path+".", e))
-		ef := view.ElementForm{Group: g, Index: i, Path: path, First: i == 0, Last: i == len(es)-1}
+		ef := view.ElementForm{Group: g, Index: i, Path: path, First: i == 0, Last: i == len(es)-1, Arms: arms}
 		if list == "elements" {
 			n := strconv.Itoa(i)
 			ef.UpAction, ef.DownAction, ef.DeleteAction = "up:"+n, "down:"+n, "delete:"+n
 		} else {
 			ef.UpAction, ef.DownAction, ef.DeleteAction = "up-at:"+path, "down-at:"+path, "delete-at:"+path
-		}
-		if e.Type == optics.TypeSplitter {
-			arm := fb.armForm(path+".reflected", "Reflected arm of "+nonEmpty(e.ID, "this splitter"), e.Reflected)
-			ef.Arms = append(ef.Arms, arm)
 		}
 		out = append(out, ef)
 	}
@@ -38,10 +40,12 @@ func (fb *formBuilder) elementForms(list string, es []optics.Element) []view.Ele
 
 // armForm is an element list with the control that adds an element at its end.
 func (fb *formBuilder) armForm(list, title string, es []optics.Element) view.ArmForm {
+	elements := fb.elementForms(list, es)
 	return view.ArmForm{
 		Title:     title,
 		List:      list,
-		Elements:  fb.elementForms(list, es),
+		Elements:  elements,
+		Errors:    fb.take(list), // after its elements took theirs
 		AddName:   addInName(list),
 		AddAction: "add-in:" + list,
 		AddTypes:  typeOptions(),
@@ -68,9 +72,10 @@ func moreSourceFields(k int, m *optics.MoreSource) []spec {
 func (fb *formBuilder) moreSourceForm(k int, m *optics.MoreSource) view.SourceForm {
 	p := moreSourcePrefix(k)
 	title := "Laser " + nonEmpty(m.ID, strconv.Itoa(k+2))
+	arm := fb.armForm(p+"elements", "Elements of "+nonEmpty(m.ID, "this laser"), m.Elements) // first: see elementForms
 	return view.SourceForm{
 		Group:        fb.group(title, "more-source", strings.TrimSuffix(p, "."), moreSourceFields(k, m)),
-		Arm:          fb.armForm(p+"elements", "Elements of "+nonEmpty(m.ID, "this laser"), m.Elements),
+		Arm:          arm,
 		DeleteAction: "delete-source:" + strconv.Itoa(k),
 	}
 }

@@ -131,3 +131,46 @@ func TestUnknownArmIsTheMainLine(t *testing.T) {
 		}
 	}
 }
+
+// TestNestedProblemsFindTheirPlace: a problem is shown at its input when it has one, else in the
+// group of the element or list it is about, the innermost one.
+func TestNestedProblemsFindTheirPlace(t *testing.T) {
+	b := benchtest.Load(t, "demo-bench.json")
+	bs := optics.DefaultElement(optics.TypeSplitter)
+	bs.ID = "BS1"
+	bs.Reflected = []optics.Element{optics.DefaultElement(optics.TypeMirror)}
+	b.Elements = append([]optics.Element{bs}, b.Elements...)
+	problems := []optics.Problem{
+		{Path: "elements[0].reflected[0].gap_mm", Message: "at the input"},
+		{Path: "elements[0].reflected[0].faces_mm", Message: "in the nested element"},
+		{Path: "elements[0].reflected", Message: "in the arm"},
+		{Path: "elements[0].dichroic.edge_nm", Message: "at the dichroic"},
+	}
+	f := buildForm("x", b, benchValues(b), problems)
+	arm := f.Elements[0].Arms[0]
+	nested := arm.Elements[0]
+	var gapErr, dichroicErr string
+	for _, fl := range nested.Fields {
+		if fl.Name == "elements[0].reflected[0].gap_mm" {
+			gapErr = fl.Error
+		}
+	}
+	for _, fl := range f.Elements[0].Fields {
+		if fl.Name == "elements[0].dichroic" {
+			dichroicErr = fl.Error
+		}
+	}
+	checks := []struct{ where, got, want string }{
+		{"nested gap input", gapErr, "at the input"},
+		{"nested element group", strings.Join(nested.Errors, "; "), "faces_mm: in the nested element"},
+		{"arm group", strings.Join(arm.Errors, "; "), "in the arm"},
+		{"dichroic input", dichroicErr, "edge_nm: at the dichroic"},
+		{"splitter group", strings.Join(f.Elements[0].Errors, "; "), ""},
+		{"form", strings.Join(f.Errors, "; "), ""},
+	}
+	for _, c := range checks {
+		if c.got != c.want {
+			t.Errorf("%s shows %q, want %q", c.where, c.got, c.want)
+		}
+	}
+}

@@ -42,7 +42,8 @@ type ArmForm struct {
 	Title     string
 	List      string // JSON path of the list: elements[1].reflected
 	Elements  []ElementForm
-	AddName   string // the type choice's input name
+	Errors    []string // problems of the list itself
+	AddName   string   // the type choice's input name
 	AddAction string
 	AddTypes  []Option
 }
