@@ -81,7 +81,7 @@ func TestFormCarriesNestedLists(t *testing.T) {
 	inner.Reflect = new(0.3)
 	inner.Reflected = []optics.Element{{ID: "D9", Type: optics.TypeDump, GapMM: 40}}
 	bs := optics.DefaultElement(optics.TypeSplitter)
-	bs.ID, bs.ThicknessMM, bs.Material = "BS1", new(3.0), "N-BK7"
+	bs.ID, bs.ThicknessMM, bs.Material = "BS1", new(3.0), "fused-silica"
 	bs.Dichroic = &optics.Dichroic{EdgeNM: 600, Reflects: optics.ReflectsLonger}
 	bs.Mount = &optics.Mount{WidthMM: 30, DepthMM: 20}
 	mirror := optics.DefaultElement(optics.TypeMirror)

@@ -29,9 +29,9 @@ type Start struct {
 // Starts are the branching benches offered beside the demo, in the order the page shows them.
 var Starts = []Start{
 	{Name: "michelson", File: "michelson-bench.json", Button: "Start from a Michelson interferometer",
-		About: "A splitter sends the beam to two mirrors; both returns meet again on the screen.", Bench: michelson},
+		About: "A splitter sends a red laser to two end mirrors a quarter millimetre apart in distance; both returns meet again on a screen.", Bench: michelson},
 	{Name: "combiner", File: "combiner-bench.json", Button: "Start from two lasers combined",
-		About: "A green laser joins a red one on a dichroic; both run on together.", Bench: combiner},
+		About: "A green laser joins an infrared one on a dichroic; one lens focuses both on a screen.", Bench: combiner},
 }
 
 // StartNamed finds a start bench by name.
