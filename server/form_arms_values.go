@@ -34,12 +34,16 @@ func putElements(v map[string]string, list string, es []optics.Element) {
 // the source fields that stand inline beside them.
 func putMoreSource(v map[string]string, k int, m *optics.MoreSource) {
 	p := moreSourcePrefix(k)
-	putFields(v, p, optics.MoreSourceFields, m)
+	putFields(v, p, moreSourceOwn, m)
 	putFields(v, p, optics.SourceFields, &m.Source)
 	putFields(v, p, optics.SourceKindOrFirst(m.Kind).Fields, &m.Source)
 }
 
 func moreSourcePrefix(k int) string { return fmt.Sprintf("more_sources[%d].", k) }
+
+// moreSourceOwn are a further source's own fields; its source fields are the first source's and
+// are written and read as those are.
+var moreSourceOwn = pick(optics.MoreSourceFields, "id", "wavelengths_nm", "elements")
 
 // dichroicText is a dichroic edge as the form's JSON text, as in the bench file.
 func dichroicText(d *optics.Dichroic) string {
@@ -90,7 +94,7 @@ func (f *formReader) moreSources() []optics.MoreSource {
 	for k := 0; f.has(moreSourcePrefix(k)+"id") && k < maxFormElements; k++ {
 		p := moreSourcePrefix(k)
 		m := optics.MoreSource{Source: f.sourceAt(p)}
-		f.fields(p, optics.MoreSourceFields, &m)
+		f.fields(p, moreSourceOwn, &m)
 		if m.Elements == nil {
 			m.Elements = []optics.Element{}
 		}

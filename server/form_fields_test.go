@@ -2,6 +2,7 @@ package server
 
 import (
 	"bytes"
+	"encoding/json"
 	"slices"
 	"strings"
 	"testing"
@@ -98,7 +99,9 @@ func TestFormCarriesNestedLists(t *testing.T) {
 		Reflected: []optics.Element{{ID: "D8", Type: optics.TypeDump, GapMM: 20}}}}
 	b.MoreSources = []optics.MoreSource{more}
 
-	want, err := optics.Encode(b)
+	// The form's round trip is checked on the values, as json.Marshal writes them: the bench's
+	// geometry (whether each pass meets its part) is not the form's to judge.
+	want, err := json.Marshal(b)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -114,7 +117,7 @@ func TestFormCarriesNestedLists(t *testing.T) {
 	if len(problems) > 0 {
 		t.Fatalf("problems reading the form back: %v", problems)
 	}
-	back, err := optics.Encode(got)
+	back, err := json.Marshal(got)
 	if err != nil {
 		t.Fatal(err)
 	}
