@@ -46,7 +46,9 @@ func buildMachZehnder(t *testing.T, scripts bool) {
 	); err != nil {
 		t.Fatalf("start from the demo: %v", err)
 	}
-	pollGo(t, tab, "the demo's page is shown", `!!document.querySelector('[data-testid=bench-form]')`)
+	// A page counts as shown once it is parsed to the end: the form's last controls come late.
+	shown := func(cond string) string { return `document.readyState === 'complete' && (` + cond + `)` }
+	pollGo(t, tab, "the demo's page is shown", shown(`!!document.querySelector('[data-testid=bench-form]')`))
 
 	// step types values into the form, presses a button and waits until the page shows done.
 	step := func(what string, values map[string]string, button, done string) {
@@ -60,7 +62,7 @@ func buildMachZehnder(t *testing.T, scripts bool) {
 		if err := chromedp.Do(tab, chromedp.Click(chromedp.CSS(`button[name=action][value="`+button+`"]`))); err != nil {
 			t.Fatalf("%s: press %s: %v", what, button, err)
 		}
-		pollGo(t, tab, what, done)
+		pollGo(t, tab, what, shown(done))
 	}
 	has := func(name, value string) string {
 		return `(document.querySelector('[name="` + name + `"]') || {}).value === ` + quote(value)
@@ -104,5 +106,5 @@ func buildMachZehnder(t *testing.T, scripts bool) {
 	if err := chromedp.Do(tab, chromedp.Click(chromedp.CSS(`[data-testid=arm-choice] a[href="?arm=BS1.reflected"]`))); err != nil {
 		t.Fatalf("open the reflected arm's side view: %v", err)
 	}
-	pollGo(t, tab, "the side view shows BS1's reflected arm", `(document.querySelector('[data-testid=arm-current]') || {}).textContent === 'BS1.reflected'`)
+	pollGo(t, tab, "the side view shows BS1's reflected arm", shown(`(document.querySelector('[data-testid=arm-current]') || {}).textContent === 'BS1.reflected'`))
 }
