@@ -42,6 +42,7 @@ func (t *tableScene) drawArmBeams(p *pen) {
 	lw := p.num(1.2 * t.st.line)
 	p.group(`class="arms"`)
 	defer p.gend()
+	t.markMainOpen(p)
 	for _, i := range arms {
 		ba, c := &t.board.Arms[i], t.armColor(i)
 		parentPath, parentBand := t.parentOf(i)
@@ -132,11 +133,29 @@ func (t *tableScene) drawStray(p *pen, from, dir r2.Vec, c string) {
 	lw := p.num(1.2 * t.st.line)
 	p.polyline(xs, ys, `class="stray-beam"`, `fill="none"`, attr("stroke", c), attr("stroke-width", lw),
 		attr("stroke-dasharray", p.num(2*t.st.line)+" "+p.num(2*t.st.line)))
+	t.markOpenEnd(p, from, end, dir)
+}
+
+// markOpenEnd marks where a stray beam from an open port leaves the drawing: a cross, and the
+// words "open port" beside the beam just before it.
+func (t *tableScene) markOpenEnd(p *pen, from, end, dir r2.Vec) {
 	x, y := t.pt(end)
-	p.cross(x, y, 0.8*t.st.marker, `stroke="#c62828"`, attr("stroke-width", lw))
+	p.cross(x, y, 0.8*t.st.marker, `stroke="#c62828"`, attr("stroke-width", p.num(1.2*t.st.line)))
 	back := math.Min(0.5*r2.Norm(r2.Sub(end, from)), 40)
 	mx, my := t.pt(r2.Sub(r2.Sub(end, r2.Scale(back, dir)), r2.Scale(0.9*t.st.font/t.st.s, perp(dir))))
 	p.text(mx, my, "open port", attr("font-size", p.num(0.9*t.st.font)), `fill="#c62828"`, `text-anchor="middle"`)
+}
+
+// markMainOpen marks the main line's end as an open port when it is one on a branching bench;
+// the main line itself runs on dashed as on every bench (drawBeam).
+func (t *tableScene) markMainOpen(p *pen) {
+	bd := t.board
+	if len(t.branches()) == 0 || !bd.Arms[0].Open || len(bd.Path) == 0 || t.endsTerminated() {
+		return
+	}
+	last := bd.Path[len(bd.Path)-1].At
+	end := r2.Add(last, r2.Scale(t.exitDistance(last, bd.TailDir), bd.TailDir))
+	t.markOpenEnd(p, last, end, bd.TailDir)
 }
 
 // armElements are the elements of the branches with their places, each part once: a pass
