@@ -89,20 +89,21 @@ func (s *Server) revResult(d design, o view.DrawOptions) (view.Result, error) {
 }
 
 // revSVG is one standalone drawing of a stored revision: artSideSVG (at the page size, with or
-// without the paraxial overlay), artTableSVG or artPlanSVG.
-func (s *Server) revSVG(d design, kind string, paraxial bool) ([]byte, error) {
+// without the paraxial overlay, of one arm), artTableSVG or artPlanSVG.
+func (s *Server) revSVG(d design, kind string, paraxial bool, arm string) ([]byte, error) {
 	rep, err := s.report(d)
 	if err != nil {
 		return nil, err
 	}
 	a := artifact{kind: kind}
 	if kind == artSideSVG {
-		a.opts = view.PageDrawing.WithParaxial(paraxial)
+		a.opts = view.PageDrawing.WithParaxial(paraxial).WithArm(view.KnownArm(rep, arm))
 	}
 	return memo(s.cache, d.rev.ID, a, func() ([]byte, error) {
 		switch kind {
 		case artSideSVG:
-			return diagram.Side(rep, a.opts.Side(rep)), nil
+			side := view.SideReport(rep, a.opts.Arm)
+			return diagram.Side(side, a.opts.Side(side)), nil
 		case artTableSVG:
 			return diagram.Table(rep, view.PageDrawing.Table()), nil
 		case artPlanSVG:

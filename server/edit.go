@@ -134,7 +134,7 @@ func (s *Server) edit(w http.ResponseWriter, r *http.Request) {
 		return
 	}
 	action := vals.Get("action")
-	if ps := applyAction(b, action, vals.Get("add.type"), vals.Get("add.at")); len(ps) > 0 {
+	if ps := applyAction(b, action, vals); len(ps) > 0 {
 		values := benchValues(b)
 		overlay(values, vals)
 		s.invalidEdit(w, r, d, b, values, ps)
@@ -227,7 +227,7 @@ func (s *Server) preview(w http.ResponseWriter, r *http.Request) {
 			s.fail(w, r, err)
 			return
 		}
-		res = view.NewResult(rep, view.PageDrawing)
+		res = view.NewResult(rep, view.PageDrawing.WithArm(view.KnownArm(rep, r.URL.Query().Get("arm"))))
 	}
 	s.render(w, r, status, view.ResultFragment(res))
 }

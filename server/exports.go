@@ -42,7 +42,7 @@ func (s *Server) drawing(w http.ResponseWriter, r *http.Request, kind string) {
 		s.fail(w, r, err)
 		return
 	}
-	svg, err := s.revSVG(d, kind, r.URL.Query().Get("paraxial") == "1")
+	svg, err := s.revSVG(d, kind, r.URL.Query().Get("paraxial") == "1", r.URL.Query().Get("arm"))
 	if err != nil {
 		s.fail(w, r, err)
 		return

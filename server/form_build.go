@@ -27,13 +27,9 @@ func benchValues(b *optics.Bench) map[string]string {
 			v["materials"] = string(data)
 		}
 	}
-	for i := range b.Elements {
-		e := &b.Elements[i]
-		p := fmt.Sprintf("elements[%d].", i)
-		putFields(v, p, optics.ElementFields, e)
-		if k, ok := optics.KindOf(e.Type); ok {
-			putFields(v, p, k.Fields, e)
-		}
+	putElements(v, "elements", b.Elements)
+	for k := range b.MoreSources {
+		putMoreSource(v, k, &b.MoreSources[k])
 	}
 	return v
 }
@@ -77,6 +73,12 @@ func putFields(v map[string]string, prefix string, fields []optics.Field, obj an
 			for i := range *x {
 				putFields(v, fmt.Sprintf("%s[%d].", path, i), fl.Fields, &(*x)[i])
 			}
+		case **optics.Dichroic:
+			if *x != nil {
+				v[path] = dichroicText(*x)
+			}
+		case *[]optics.Element:
+			putElements(v, path, *x)
 		}
 	}
 }
@@ -129,12 +131,13 @@ type formBuilder struct {
 	values   map[string]string
 	problems map[string][]string // field name -> messages
 	rest     []optics.Problem    // problems not yet attached to a field
+	parts    []string            // what a same_as may name
 }
 
 // buildForm makes the edit form for bench b (its element types and source kind decide which
 // fields appear), filled from values and marked with problems.
 func buildForm(id string, b *optics.Bench, values map[string]string, problems []optics.Problem) view.BenchForm {
-	fb := &formBuilder{values: values, problems: map[string][]string{}}
+	fb := &formBuilder{values: values, problems: map[string][]string{}, parts: optics.Parts(b)}
 	names := fieldNames(b)
 	for _, p := range problems {
 		if name, ok := fieldFor(p.Path, names); ok {
@@ -159,10 +162,12 @@ func buildForm(id string, b *optics.Bench, values map[string]string, problems []
 	}
 	f.RayErrors = fb.take("source.rays")
 	f.AddAt = append(f.AddAt, view.Option{Value: "0", Label: "at the start"})
+	f.Elements = fb.elementForms("elements", b.Elements)
 	for i, e := range b.Elements {
-		g := fb.group(elementTitle(i, e), "element", fmt.Sprintf("elements[%d]", i), elementFields(i, e.Type))
-		f.Elements = append(f.Elements, view.ElementForm{Group: g, Index: i, First: i == 0, Last: i == len(b.Elements)-1})
 		f.AddAt = append(f.AddAt, view.Option{Value: strconv.Itoa(i + 1), Label: "after " + nonEmpty(e.ID, fmt.Sprintf("element %d", i+1))})
+	}
+	for k := range b.MoreSources {
+		f.MoreSources = append(f.MoreSources, fb.moreSourceForm(k, &b.MoreSources[k]))
 	}
 	f.Source.Errors = append(f.Source.Errors, fb.take("source")...)
 	for _, p := range fb.rest {
@@ -256,7 +261,9 @@ func (fb *formBuilder) fields(specs []spec) []view.Field {
 		switch {
 		case strings.HasSuffix(s.name, ".type"):
 			f.Kind, f.Options, f.Apply = "select", typeOptions(), true
-		case s.name == "source.kind":
+		case strings.HasSuffix(s.name, ".same_as"):
+			f.Kind, f.Options = "select", sameAsOptions(fb.parts, f.Value)
+		case s.name == "source.kind" || strings.HasPrefix(s.name, "more_sources[") && strings.HasSuffix(s.name, "].kind"):
 			f.Kind, f.Options, f.Apply = "select", sourceKindOptions(), true
 		case s.name == "table.grid":
 			f.Kind = "select"
@@ -289,7 +296,7 @@ var (
 	generalLayout   = pick(optics.BenchFields, "title", "wavelengths_nm", "notes")
 	materialsLayout = pick(optics.BenchFields, "materials")
 	sourceHead      = pick(optics.SourceFields, "kind", "x_mm", "y_mm", "heading_deg") // then the kind's own
-	sourceTail      = pick(optics.SourceFields, "fan_rays")
+	sourceTail      = pick(optics.SourceFields, "fan_rays", "height_mm")
 )
 
 // pick returns the table entries of keys, in that order. A key without an entry is a programmer's
@@ -337,17 +344,19 @@ func tableFields() []spec { return specs("table.", optics.TableFields) }
 // sourceFields lays out the source: its kind first, then where it stands, its kind's own fields
 // (the first kind's for a kind that is not known) and the fan size. Rays and beam are groups of
 // their own.
-func sourceFields(kind string) []spec {
-	return slices.Concat(specs("source.", sourceHead), specs("source.", optics.SourceKindOrFirst(kind).Fields), specs("source.", sourceTail))
+func sourceFields(kind string) []spec { return sourceFieldsAt("source.", kind) }
+
+func sourceFieldsAt(prefix, kind string) []spec {
+	return slices.Concat(specs(prefix, sourceHead), specs(prefix, optics.SourceKindOrFirst(kind).Fields), specs(prefix, sourceTail))
 }
 
 func beamFields() []spec { return specs("source.beam.", optics.BeamFields) }
 
 func rayFields(i int) []spec { return specs(fmt.Sprintf("source.rays[%d].", i), optics.RayFields) }
 
-// elementFields lays out element i of a type: its common fields, the type's own, then the mount's.
-func elementFields(i int, typ string) []spec {
-	p := fmt.Sprintf("elements[%d].", i)
+// elementFields lays out the element under prefix p (elements[2].) of a type: its common fields,
+// the type's own, then the mount's.
+func elementFields(p string, typ string) []spec {
 	s := specs(p, optics.ElementFields)
 	if k, ok := optics.KindOf(typ); ok {
 		s = append(s, specs(p, k.Fields)...)
@@ -376,8 +385,10 @@ func fieldNames(b *optics.Bench) map[string]bool {
 	for i := range b.Source.Rays {
 		add(rayFields(i))
 	}
-	for i, e := range b.Elements {
-		add(elementFields(i, e.Type))
+	addElementNames(names, "elements", b.Elements)
+	for k := range b.MoreSources {
+		add(moreSourceFields(k, &b.MoreSources[k]))
+		addElementNames(names, moreSourcePrefix(k)+"elements", b.MoreSources[k].Elements)
 	}
 	return names
 }

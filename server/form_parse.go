@@ -18,6 +18,7 @@ const maxFormElements = 1000
 type formReader struct {
 	vals     url.Values
 	problems []optics.Problem
+	depth    int // of the nested element list being read
 }
 
 func (f *formReader) add(path, format string, args ...any) {
@@ -157,36 +158,34 @@ func parseBenchForm(vals url.Values) (*optics.Bench, []optics.Problem) {
 	f.fields("table.", optics.TableFields, &b.Table)
 	b.Source = f.source()
 	b.Materials = f.materials()
-	for i := 0; f.has(fmt.Sprintf("elements[%d].type", i)); i++ {
-		if i >= maxFormElements {
-			f.add("elements", "more than %d elements; a bench holds at most %d", maxFormElements, optics.MaxElements)
-			break
-		}
-		b.Elements = append(b.Elements, f.element(i))
-	}
+	b.Elements = f.elements("elements")
+	b.MoreSources = f.moreSources()
 	return b, f.problems
 }
 
-// source reads the source: where it stands and its fan size, its kind's own fields, then its rays
-// and beam (in this order, which is the order of the problems).
-func (f *formReader) source() optics.Source {
+// source reads the first source.
+func (f *formReader) source() optics.Source { return f.sourceAt("source.") }
+
+// sourceAt reads the source fields under prefix: where it stands and its fan size, its kind's own
+// fields, then its rays and beam (in this order, which is the order of the problems).
+func (f *formReader) sourceAt(prefix string) optics.Source {
 	var s optics.Source
 	var objects []optics.Field
 	for _, fl := range optics.SourceFields {
 		if fl.Fields != nil {
 			objects = append(objects, fl)
 		} else {
-			f.field("source."+fl.Key, fl, &s)
+			f.field(prefix+fl.Key, fl, &s)
 		}
 	}
-	shown := f.text("source._kind_shown")
+	shown := f.text(prefix + "_kind_shown")
 	if shown != "" && shown != s.Kind {
 		// The kind was changed and applied: its own fields were not on the form yet.
 		s = optics.ChangeSourceKind(s, s.Kind)
 	} else if k, ok := optics.SourceKindOf(s.Kind); ok {
-		f.fields("source.", k.Fields, &s)
+		f.fields(prefix, k.Fields, &s)
 	}
-	f.fields("source.", objects, &s)
+	f.fields(prefix, objects, &s)
 	return s
 }
 
@@ -238,6 +237,16 @@ func (f *formReader) field(path string, fl optics.Field, obj any) {
 			f.fields(fmt.Sprintf("%s[%d].", path, i), fl.Fields, &r)
 			*p = append(*p, r)
 		}
+	case **optics.Dichroic:
+		*p = f.dichroic(path)
+	case *[]optics.Element:
+		if f.depth >= maxFormDepth {
+			f.add(path, "nests more than %d lists", maxFormDepth)
+			return
+		}
+		f.depth++
+		*p = f.elements(path)
+		f.depth--
 	}
 }
 
@@ -279,11 +288,10 @@ func (f *formReader) materials() map[string]optics.MaterialSpec {
 	return m
 }
 
-// element reads element i: its common fields, then its type's own. When the type was changed and
+// element reads the element whose inputs stand under prefix p (elements[2].): its common fields, then its type's own. When the type was changed and
 // applied, the new type's fields were not on the form yet: the element becomes one of the new type
 // (optics.ChangeType), keeping what the two types share.
-func (f *formReader) element(i int) optics.Element {
-	p := fmt.Sprintf("elements[%d].", i)
+func (f *formReader) element(p string) optics.Element {
 	typ := f.text(p + "type")
 	e := optics.Element{Type: typ, ID: f.text(p + "id")}
 	shown := f.text(p + "_type_shown")
@@ -294,6 +302,11 @@ func (f *formReader) element(i int) optics.Element {
 		e = optics.ChangeType(old, typ)
 	}
 	f.fields(p, optics.ElementFields, &e) // id and type again, the same texts
+	if e.SameAs != "" {
+		e.Mount = nil // a pass has the part's
+		f.pass(p, &e)
+		return e
+	}
 	if k, ok := optics.KindOf(typ); ok && !changed {
 		f.fields(p, k.Fields, &e)
 	}

@@ -196,20 +196,20 @@ func TestApplyAction(t *testing.T) {
 		return b
 	}
 	b := mk()
-	applyAction(b, "add", optics.TypeScreen, "")
+	applyAction(b, "add", url.Values{"add.type": {optics.TypeScreen}})
 	if got := b.Elements[len(b.Elements)-1].ID; got != "S3" {
 		t.Errorf("new screen id %q, want S3 at the end (S1 and S2 are taken)", got)
 	}
 	b = mk()
-	if ps := applyAction(b, "down:0", "", ""); ps != nil || b.Elements[1].ID != "L1" {
+	if ps := applyAction(b, "down:0", nil); ps != nil || b.Elements[1].ID != "L1" {
 		t.Errorf("down:0 gave %v, elements[1] %s", ps, b.Elements[1].ID)
 	}
-	for _, bad := range []string{"down:7", "up:0", "delete:-1", "delete:x", "delete-ray:1", "fly"} {
-		if ps := applyAction(mk(), bad, "", ""); len(ps) != 1 || ps[0].Path != "action" {
+	for _, bad := range []string{"down:7", "up:0", "delete:-1", "delete:x", "delete-ray:1", "fly", "delete-at:elements[9]", "up-at:elements[0]", "down-at:nowhere", "delete-source:0", "add-in:elements[0].reflected"} {
+		if ps := applyAction(mk(), bad, nil); len(ps) != 1 || ps[0].Path != "action" {
 			t.Errorf("action %q: %v", bad, ps)
 		}
 	}
-	if ps := applyAction(mk(), "add", "prism", "1"); len(ps) != 1 || ps[0].Path != "add.type" || !strings.HasPrefix(ps[0].Message, `unknown element type "prism"`) {
+	if ps := applyAction(mk(), "add", url.Values{"add.type": {"prism"}, "add.at": {"1"}}); len(ps) != 1 || ps[0].Path != "add.type" || !strings.HasPrefix(ps[0].Message, `unknown element type "prism"`) {
 		t.Errorf("adding a prism: %v", ps)
 	}
 }

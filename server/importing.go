@@ -2,6 +2,7 @@ package server
 
 import (
 	"encoding/json"
+	"github.com/go-chi/chi/v5"
 	"io"
 	"mime"
 	"net/http"
@@ -117,12 +118,27 @@ func writeJSONError(w http.ResponseWriter, status int, err error) {
 
 // demo stores a fresh copy of the demo bench and answers 303 to it.
 func (s *Server) demo(w http.ResponseWriter, r *http.Request) {
-	b, err := optics.Decode(demo.Bench)
-	if err != nil {
-		s.fail(w, r, optics.Errorf(optics.EInternal, "the embedded demo bench does not decode: %v", err))
+	s.startFrom(w, r, demo.Bench, "the demo")
+}
+
+// demoNamed stores a fresh copy of one of the other start benches (demo.Starts).
+func (s *Server) demoNamed(w http.ResponseWriter, r *http.Request) {
+	st, ok := demo.StartNamed(chi.URLParam(r, "name"))
+	if !ok {
+		s.fail(w, r, optics.Errorf(optics.ENotFound, "there is no start bench %q", chi.URLParam(r, "name")))
 		return
 	}
-	rev, err := s.storeValid(b, "started from the demo")
+	s.startFrom(w, r, st.Bench, "the "+st.Name+" demo")
+}
+
+// startFrom stores a fresh copy of an embedded bench and answers 303 to it.
+func (s *Server) startFrom(w http.ResponseWriter, r *http.Request, data []byte, name string) {
+	b, err := optics.Decode(data)
+	if err != nil {
+		s.fail(w, r, optics.Errorf(optics.EInternal, "the embedded bench %s does not decode: %v", name, err))
+		return
+	}
+	rev, err := s.storeValid(b, "started from "+name)
 	if err != nil {
 		s.fail(w, r, err)
 		return

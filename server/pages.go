@@ -2,8 +2,11 @@ package server
 
 import (
 	"net/http"
+	"net/url"
+	"strings"
 
 	"raytable/optics"
+	"raytable/server/demo"
 	"raytable/web/view"
 )
 
@@ -19,6 +22,9 @@ func (s *Server) renderHome(w http.ResponseWriter, r *http.Request, status int, 
 	if err != nil {
 		s.fail(w, r, err)
 		return
+	}
+	for _, st := range demo.Starts {
+		p.Starts = append(p.Starts, view.StartChoice{Action: "/demo/" + st.Name, Button: st.Button, About: st.About, TestID: "start-" + st.Name})
 	}
 	for _, rev := range revs {
 		p.Recent = append(p.Recent, view.Recent{
@@ -36,12 +42,25 @@ func (s *Server) benchPage(w http.ResponseWriter, r *http.Request) {
 		return
 	}
 	paraxial := r.URL.Query().Get("paraxial") == "1"
-	res, err := s.revResult(d, view.PageDrawing.WithParaxial(paraxial))
+	rep, err := s.report(d)
 	if err != nil {
 		s.fail(w, r, err)
 		return
 	}
-	p := s.benchPageModel(d, paraxial, buildForm(d.rev.ID, d.bench, benchValues(d.bench), nil), res)
+	arm := view.KnownArm(rep, r.URL.Query().Get("arm"))
+	res, err := s.revResult(d, view.PageDrawing.WithParaxial(paraxial).WithArm(arm))
+	if err != nil {
+		s.fail(w, r, err)
+		return
+	}
+	form := buildForm(d.rev.ID, d.bench, benchValues(d.bench), nil)
+	if arm != "" { // previews while a slider moves keep showing this arm
+		form.PreviewURL += "?arm=" + url.QueryEscape(arm)
+	}
+	p := s.benchPageModel(d, paraxial, form, res)
+	if arm != "" {
+		p.Links.SideSVG = addQuery(p.Links.SideSVG, "arm="+url.QueryEscape(arm))
+	}
 	s.render(w, r, http.StatusOK, view.Bench(p))
 }
 
@@ -109,4 +128,12 @@ func (s *Server) history(w http.ResponseWriter, r *http.Request) {
 		cur = parent
 	}
 	s.render(w, r, http.StatusOK, view.History(p))
+}
+
+// addQuery appends one query parameter to a link that may have others.
+func addQuery(link, param string) string {
+	if strings.Contains(link, "?") {
+		return link + "&" + param
+	}
+	return link + "?" + param
 }

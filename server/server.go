@@ -95,6 +95,7 @@ func (s *Server) routes() chi.Router {
 	r.Post("/import", s.importBench)
 	r.Get("/demo", s.demo)
 	r.Post("/demo", s.demo)
+	r.Post("/demo/{name}", s.demoNamed)
 	r.Get("/compare", s.compare)
 	r.Handle("/static/*", http.StripPrefix("/static/", staticFiles()))
 	// Browsers ask for /favicon.ico by themselves, e.g. when a drawing is opened on its own.

@@ -78,6 +78,11 @@ func (t *tableScene) region() {
 	for _, n := range bd.Path {
 		pad(n.At)
 	}
+	for _, a := range bd.Arms {
+		for _, n := range a.Path {
+			pad(n.At)
+		}
+	}
 	for _, m := range bd.Mounts {
 		for _, c := range m.Corners {
 			pad(c)
@@ -169,17 +174,20 @@ func (t *tableScene) draw(p *pen) {
 	t.drawHoles(p)
 	t.drawFootprints(p)
 	t.drawBeam(p)
+	t.drawArmBeams(p)
 	t.drawSource(p)
 	p.group(`class="elements"`)
 	for i := range t.elements() {
 		t.drawElement(p, &t.r.Elements[i], &bd.Elements[i])
 	}
 	p.gend()
+	t.drawArmElements(p)
 	if st.postLabels {
 		t.drawPosts(p)
 	} else {
 		t.drawLabels(p)
 	}
+	t.drawMeetings(p)
 	t.drawWarningMarkers(p)
 }
 
@@ -288,20 +296,28 @@ func (t *tableScene) exitDistance(a, d r2.Vec) float64 {
 	return best
 }
 
-// drawSource draws an arrowhead ending at the source, pointing along the beam, and its label.
+// drawSource draws the first source's arrow, then each further source's with its id.
 func (t *tableScene) drawSource(p *pen) {
 	bd := t.board
-	if len(bd.Path) == 0 {
-		return
+	if len(bd.Path) > 0 {
+		t.drawSourceAt(p, bd.Path[0].At, bd.SourceDir, "source")
 	}
-	tip, d := bd.Path[0].At, bd.SourceDir
+	for _, i := range t.branches() {
+		if a := &t.r.Arms[i]; a.Parent == nil && len(bd.Arms[i].Path) > 0 {
+			t.drawSourceAt(p, bd.Arms[i].Path[0].At, bd.Arms[i].SourceDir, a.ID)
+		}
+	}
+}
+
+// drawSourceAt draws an arrowhead ending at a source, pointing along its beam, and its label.
+func (t *tableScene) drawSourceAt(p *pen, tip, d r2.Vec, label string) {
 	size := 2.5 * t.st.minHalf / t.st.s
 	n := perp(d)
 	back := r2.Sub(tip, r2.Scale(2*size, d))
 	xs, ys := t.poly([]r2.Vec{tip, r2.Add(back, r2.Scale(size, n)), r2.Sub(back, r2.Scale(size, n))})
 	p.polygon(xs, ys, `fill="#222222"`)
 	x, y := t.pt(back)
-	p.text(x, y-size*t.st.s-0.5*t.st.font, "source", attr("font-size", p.num(t.st.font)), `fill="#222222"`)
+	p.text(x, y-size*t.st.s-0.5*t.st.font, label, attr("font-size", p.num(t.st.font)), `fill="#222222"`)
 }
 
 // perp turns a direction on the table by 90° counter-clockwise seen from above.

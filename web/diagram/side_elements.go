@@ -79,6 +79,20 @@ var sideDrawings = map[string]func(p *pen, f *sideFrame, e *optics.ElementPlace,
 		hv := visibleHalf(f, h)
 		p.rect(f.x(z), f.y(hv), 10, 2*hv*f.pxPerMMY(), `fill="#262626"`)
 	},
+	// A splitter is drawn as a thin half-silvered plate: a light filled bar with a dashed face.
+	optics.TypeSplitter: func(p *pen, f *sideFrame, e *optics.ElementPlace, z, h float64) {
+		hv := visibleHalf(f, h)
+		p.rect(f.x(z)-2, f.y(hv), 4, 2*hv*f.pxPerMMY(), `fill="#c9dbe8"`, `stroke="#37474f"`, `stroke-width="1"`, `stroke-dasharray="3 2"`)
+	},
+	// A periscope is drawn as its two mirrors, one above the other, joined by the vertical leg.
+	optics.TypePeriscope: func(p *pen, f *sideFrame, e *optics.ElementPlace, z, h float64) {
+		hv, x := visibleHalf(f, h), f.x(z)
+		p.group(`fill="none"`, `stroke="#37474f"`, `stroke-width="2.5"`)
+		p.line(x-4, f.y(hv), x+4, f.y(hv))
+		p.line(x-4, f.y(-hv), x+4, f.y(-hv))
+		p.gend()
+		p.line(x, f.y(hv), x, f.y(-hv), `stroke="#37474f"`, `stroke-width="1"`, `stroke-dasharray="2 2"`)
+	},
 }
 
 // faceOutline samples one face from height y0 to y1 (mm) as pixel points: a circular arc of the

@@ -75,6 +75,13 @@ func (t *tableScene) drawElement(p *pen, e *optics.ElementPlace, be *optics.Boar
 		side, depth := r2.Scale(s, ac), r2.Scale(2*s, in)
 		xs, ys := t.poly([]r2.Vec{r2.Add(pos, side), r2.Add(r2.Add(pos, side), depth), r2.Add(r2.Sub(pos, side), depth), r2.Sub(pos, side)})
 		p.polygon(xs, ys, `fill="#262626"`)
+	case optics.TypeSplitter:
+		stroke(pos, h, `stroke="#6a8fa8"`, w(2.5), attr("stroke-dasharray", p.num(3*t.st.line)+" "+p.num(1.5*t.st.line)))
+	case optics.TypePeriscope:
+		s := math.Max(4, 0.6*t.st.minHalf/t.st.s)
+		side, depth := r2.Scale(s, ac), r2.Scale(s, in)
+		xs, ys := t.poly([]r2.Vec{r2.Add(r2.Sub(pos, depth), side), r2.Add(r2.Add(pos, depth), side), r2.Sub(r2.Add(pos, depth), side), r2.Sub(r2.Sub(pos, depth), side)})
+		p.polygon(xs, ys, `fill="#b0bec5"`, `stroke="#37474f"`, w(2))
 	default:
 		stroke(pos, h, `stroke="#888888"`, w(1))
 	}

@@ -30,10 +30,11 @@ func reportItems(r *optics.Report) []item {
 	}
 	for _, s := range tables.Build(r).In(tables.Compare) {
 		cols, rows := s.ColumnsIn(tables.Compare), s.RowsIn(tables.Compare)
+		scope := sectionScope(s)
 		if s.Transposed {
 			for _, i := range cols {
 				for _, row := range rows {
-					add(s.Columns[i].Key+" "+row.QuantityLabel(tables.Compare), row.Cells[i])
+					add(scope+s.Columns[i].Key+" "+row.QuantityLabel(tables.Compare), row.Cells[i])
 				}
 			}
 			continue
@@ -41,12 +42,31 @@ func reportItems(r *optics.Report) []item {
 		for _, row := range rows {
 			for _, i := range cols {
 				if c := row.Cells[i]; !c.Omitted(tables.Compare) {
-					add(row.Key+" "+s.Columns[i].Label(tables.Compare), c)
+					add(scope+row.Key+" "+s.Columns[i].Label(tables.Compare), c)
 				}
 			}
 		}
 	}
 	return out
+}
+
+// singleLine are the sections a bench without arms has; their numbers keep the names they have
+// always had on the compare page.
+var singleLine = map[tables.Name]bool{
+	tables.System: true, tables.Chromatic: true, tables.Elements: true, tables.Spacing: true,
+	tables.RayStatus: true, tables.StoppedRays: true, tables.Blur: true, tables.Beam: true,
+	tables.Waists: true, tables.Placement: true, tables.Media: true, tables.Warnings: true,
+	tables.WarningCount: true,
+}
+
+// sectionScope is what a number's name starts with: nothing in the sections of the single line,
+// else the section's name, which for a branching bench's sections holds the arm's id, so that the
+// two designs' arms pair by id and the same element id in two arms makes two rows.
+func sectionScope(s *tables.Section) string {
+	if singleLine[s.Name] {
+		return ""
+	}
+	return string(s.Name) + ": "
 }
 
 // sameTolerance is the relative difference below which two numbers count as equal: well below

@@ -24,11 +24,35 @@ type Group struct {
 	Errors []string
 }
 
-// ElementForm is the fields of one element with its move and delete buttons.
+// ElementForm is the fields of one element with its move and delete buttons (their action
+// values), and the element lists that branch from it (a splitter's reflected arm).
 type ElementForm struct {
 	Group
-	Index       int
-	First, Last bool
+	Index        int
+	Path         string // JSON path of the element: elements[1].reflected[0]
+	First, Last  bool
+	UpAction     string
+	DownAction   string
+	DeleteAction string
+	Arms         []ArmForm
+}
+
+// ArmForm is a nested element list with the control that adds an element at its end.
+type ArmForm struct {
+	Title     string
+	List      string // JSON path of the list: elements[1].reflected
+	Elements  []ElementForm
+	Errors    []string // problems of the list itself
+	AddName   string   // the type choice's input name
+	AddAction string
+	AddTypes  []Option
+}
+
+// SourceForm is a further source: its fields, its element list and its delete button.
+type SourceForm struct {
+	Group
+	Arm          ArmForm
+	DeleteAction string
 }
 
 // RayForm is the fields of one explicit ray.
@@ -39,20 +63,21 @@ type RayForm struct {
 
 // BenchForm is the whole edit form of a design.
 type BenchForm struct {
-	Action     string // URL the form posts to
-	PreviewURL string // URL the script posts to while a slider moves
-	General    Group
-	Table      Group
-	Source     Group
-	Beam       Group
-	Materials  Group
-	Rays       []RayForm
-	RayErrors  []string
-	Elements   []ElementForm
-	AddAt      []Option // where a new element may go
-	AddTypes   []Option
-	Errors     []string // problems that match no field
-	Invalid    bool
+	Action      string // URL the form posts to
+	PreviewURL  string // URL the script posts to while a slider moves
+	General     Group
+	Table       Group
+	Source      Group
+	Beam        Group
+	Materials   Group
+	Rays        []RayForm
+	RayErrors   []string
+	Elements    []ElementForm
+	MoreSources []SourceForm
+	AddAt       []Option // where a new element may go
+	AddTypes    []Option
+	Errors      []string // problems that match no field
+	Invalid     bool
 }
 
 // Table is a table of numbers. A marked row is highlighted (a changed value, a clipped element).
@@ -81,7 +106,8 @@ type Result struct {
 	SideSVG  string
 	TableSVG string
 	Numbers  Numbers
-	Problem  string // set when nothing could be computed
+	Problem  string    // set when nothing could be computed
+	Arms     []ArmLink // the arms the side view may show; none for a bench with one
 }
 
 // Links are the addresses of one revision's pages and exports.
@@ -128,8 +154,14 @@ type Recent struct {
 	Summary string
 }
 
+// StartChoice is a bench the home page offers to start from: a button posting to Action.
+type StartChoice struct {
+	Action, Button, About, TestID string
+}
+
 // HomePage is the start page.
 type HomePage struct {
+	Starts      []StartChoice // the benches offered beside the demo
 	Recent      []Recent
 	ImportText  string   // what was pasted, kept after a failed import
 	ImportError []string // problems of a failed import

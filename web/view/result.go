@@ -24,6 +24,7 @@ const (
 type DrawOptions struct {
 	SideWidthPX, SideHeightPX, TableWidthPX int
 	Paraxial                                bool
+	Arm                                     string // the arm the side view shows; "" the main one
 }
 
 var (
@@ -47,17 +48,30 @@ func (o DrawOptions) Side(r *optics.Report) diagram.SideOptions {
 	return so
 }
 
+// WithArm is o showing arm id in the side view; the main arm is the default and so is "".
+func (o DrawOptions) WithArm(id string) DrawOptions {
+	if id == MainArm {
+		id = ""
+	}
+	o.Arm = id
+	return o
+}
+
 // Table is the table view's options at o's size.
 func (o DrawOptions) Table() diagram.TableOptions {
 	return diagram.TableOptions{WidthPX: o.TableWidthPX}
 }
 
 // NewResult draws a computed bench: the side and table views inline, and the numbers.
+// The side view shows one arm (o.Arm; the main one by default) and the result lists the arms to
+// choose from.
 func NewResult(r *optics.Report, o DrawOptions) Result {
+	side := SideReport(r, o.Arm)
 	return Result{
-		SideSVG:  InlineSVG(diagram.Side(r, o.Side(r))),
+		SideSVG:  InlineSVG(diagram.Side(side, o.Side(side))),
 		TableSVG: InlineSVG(diagram.Table(r, o.Table())),
 		Numbers:  NumbersPanel(r),
+		Arms:     armLinks(r, o.Arm),
 	}
 }
 
