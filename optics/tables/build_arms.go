@@ -17,10 +17,10 @@ func armsSection(arms []optics.ArmReport) Section {
 			{Head: same("arm"), In: Text | Page},
 			{Head: same("from"), In: Text | Page},
 			{Head: same("source"), In: Text | Page},
-			{Head: same("power"), Unit: Percent, In: Text | Page},
+			{Head: same("power"), Unit: Percent, In: Everywhere},
 			{Head: same("wavelengths"), Unit: NM, In: Text | Page},
-			{Head: same("optical path"), Unit: MM, In: Text | Page},
-			{Head: same("group delay"), Unit: PS, In: Text | Page},
+			{Head: same("optical path"), Unit: MM, In: Everywhere},
+			{Head: same("group delay"), Unit: PS, In: Everywhere},
 			{Head: same("ends"), In: Text | Page},
 		},
 		Note: Phrase{Words: Words{Page: "Power at each arm's primary wavelength, as a share of its source's; optical path Σ n·L and group delay Σ n_g·L/c from the source to the arm's last element."}},
@@ -34,7 +34,7 @@ func armsSection(arms []optics.ArmReport) Section {
 		for _, w := range a.WavelengthsNM {
 			wls = append(wls, val(w).In(Text))
 		}
-		sec.Rows = append(sec.Rows, Row{Key: a.ID, In: Text | Page, Cells: []Cell{
+		sec.Rows = append(sec.Rows, Row{Key: a.ID, In: Everywhere, Cells: []Cell{
 			say(a.ID), say(from), say(a.Source), num(a.PowerFraction, Fraction), say(strings.Join(wls, ", ")),
 			val(a.OpticalPathMM), val(a.GroupDelayPS), say(a.Ends),
 		}})
@@ -51,16 +51,16 @@ func armElementsSection(arms []optics.ArmReport) Section {
 			{Head: same("arm"), In: Text | Page},
 			{Head: same("id"), In: Text | Page},
 			{Head: same("type"), In: Text | Page},
-			{Head: Words{Page: "along the path", Text: "path"}, Unit: MM, In: Text | Page},
-			{Head: same("table x"), Unit: MM, In: Text | Page},
-			{Head: same("table y"), Unit: MM, In: Text | Page},
-			{Head: same("height"), Unit: MM, In: Text | Page},
+			{Head: Words{Page: "along the path", Text: "path", Compare: "along the path"}, Unit: MM, In: Everywhere},
+			{Head: same("table x"), Unit: MM, In: Everywhere},
+			{Head: same("table y"), Unit: MM, In: Everywhere},
+			{Head: same("height"), Unit: MM, In: Everywhere},
 			{Head: Words{Page: "heading in → out", Text: "heading in/out"}, Unit: Deg, In: Text | Page},
 		},
 	}
 	for _, a := range arms {
 		for _, e := range a.Elements {
-			sec.Rows = append(sec.Rows, Row{Key: a.ID + " " + e.ID, In: Text | Page, Cells: []Cell{
+			sec.Rows = append(sec.Rows, Row{Key: a.ID + " " + e.ID, In: Everywhere, Cells: []Cell{
 				say(a.ID), say(e.ID), say(e.Type), val(e.PathMM), val(e.TableXMM), val(e.TableYMM), val(e.HeightMM),
 				pair(val(e.HeadingInDeg), val(e.HeadingOutDeg), InOut),
 			}})
@@ -79,18 +79,18 @@ func meetingsSection(ms []optics.Meeting) Section {
 		Columns: []Column{
 			{Head: same("part"), In: Text | Page},
 			{Head: same("arms"), In: Text | Page},
-			{Head: same("miss"), Unit: MM, In: Text | Page},
-			{Head: same("angle"), Unit: MRad, In: Text | Page},
-			{Head: same("OPD"), Unit: MM, In: Text | Page},
-			{Head: same("delay"), Unit: FS, In: Text | Page},
-			{Head: same("visibility"), In: Text | Page},
+			{Head: same("miss"), Unit: MM, In: Everywhere},
+			{Head: same("angle"), Unit: MRad, In: Everywhere},
+			{Head: same("OPD"), Unit: MM, In: Everywhere},
+			{Head: same("delay"), Unit: FS, In: Everywhere},
+			{Head: same("visibility"), In: Everywhere},
 		},
 	}
 	if len(ms) == 0 {
 		sec.Note.Words = Words{Page: "No part is reached by two beams.", Text: "(no part is reached by two beams)"}
 	}
 	for _, m := range ms {
-		sec.Rows = append(sec.Rows, Row{Key: m.Part, In: Text | Page, Cells: []Cell{
+		sec.Rows = append(sec.Rows, Row{Key: m.Part, In: Everywhere, Cells: []Cell{
 			say(m.Part), say(strings.Join(m.Arms, ", ")), val(m.MissMM), optVal(m.AngleMRad), optVal(m.OPDMM),
 			optVal(m.GroupDelayFS), opt(m.Visibility, Index, Undefined),
 		}})

@@ -38,7 +38,7 @@ const (
 var arrangement = map[Layout][]Name{
 	Text:    {System, Chromatic, Elements, Arms, ArmElements, Meetings, Spacing, Media, StoppedRays, Blur, Beam, Waists, Warnings},
 	Page:    {System, Chromatic, Elements, Arms, ArmElements, Meetings, Spacing, RayStatus, Blur, Beam, Waists, Placement, Media},
-	Compare: {System, Elements, RayStatus, Blur, Spacing, Beam, Waists, Placement, WarningCount},
+	Compare: {System, Elements, Arms, ArmElements, Meetings, RayStatus, Blur, Spacing, Beam, Waists, Placement, WarningCount},
 }
 
 // In lists the sections layout l shows, in its order.
