@@ -77,6 +77,9 @@ type PlaneValues struct {
 	ExitPupilRadiusMM     *float64 `json:"exit_pupil_radius_mm"`
 	LagrangeInvariant     *float64 `json:"lagrange_invariant_mm"` // n(ū y - u ȳ) of chief and marginal rays
 	ImageHeightMM         *float64 `json:"image_height_mm"`       // chief ray height at the image, finite conjugates
+	// WorkingFNumber is 1/(2 NA'), beside the infinite-conjugate FNumber EFL/EPD (l-beam part);
+	// null when NA' is 0.
+	WorkingFNumber *float64 `json:"working_f_number"`
 }
 
 // SystemValues are the tangential (table-plane) values with the sagittal ones beside them.
@@ -183,6 +186,10 @@ type BeamReport struct {
 	Elements     []BeamAt     `json:"elements"`
 	Waists       []Waist      `json:"waists"`
 	Samples      []BeamSample `json:"samples"` // envelope along the path, for drawing
+
+	// The beam summary (l-beam part): the beam leaving the last element and the waists in glass.
+	Output      *BeamOutput  `json:"output"`       // null when the path has no surface
+	GlassWaists []GlassWaist `json:"glass_waists"` // [] when no waist lies in glass
 }
 
 // BeamAt is the beam leaving one element.
@@ -306,4 +313,35 @@ type Blur struct {
 	RMSMM        float64  `json:"rms_mm"`
 	PeakMM       float64  `json:"peak_mm"`
 	AiryRadiusMM *float64 `json:"airy_radius_mm"`
+}
+
+// BeamOutput is the beam leaving the last element, in each plane (l-beam part).
+type BeamOutput struct {
+	After string      `json:"after"` // id of the last element
+	T     OutputWaist `json:"t"`
+	S     OutputWaist `json:"s"`
+}
+
+// OutputWaist is the waist of the beam leaving the last element in one plane. FromLastMM is its
+// position from the last element's last vertex, + downstream, negative when the waist is virtual
+// (the beam already diverges). DivergenceRad is the far-field half-angle M²λ/(π w0 n).
+type OutputWaist struct {
+	FromLastMM    float64 `json:"waist_from_last_mm"`
+	RadiusMM      float64 `json:"waist_radius_mm"`
+	RayleighMM    float64 `json:"rayleigh_mm"`
+	DivergenceRad float64 `json:"divergence_rad"`
+}
+
+// GlassWaist is a beam waist inside an element's glass. DepthMM is measured from the face the
+// beam entered; the Rayleigh range is the physical one in the medium, π w0² n/(M² λ). A plane
+// whose waist lies elsewhere has nil fields.
+type GlassWaist struct {
+	Element     string   `json:"element"`
+	PathMM      float64  `json:"path_mm"`
+	DepthMM     float64  `json:"depth_mm"`
+	Index       float64  `json:"index"`
+	RadiusTMM   *float64 `json:"radius_t_mm"`
+	RadiusSMM   *float64 `json:"radius_s_mm"`
+	RayleighTMM *float64 `json:"rayleigh_t_mm"`
+	RayleighSMM *float64 `json:"rayleigh_s_mm"`
 }

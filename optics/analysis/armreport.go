@@ -46,7 +46,13 @@ func ownBeam(b *optics.BeamReport, places []optics.ElementPlace, own int) *optic
 		ids[p.ID] = true
 	}
 	startMM := places[own-1].PathMM
-	out := &optics.BeamReport{WavelengthNM: b.WavelengthNM, M2: b.M2, Elements: []optics.BeamAt{}, Waists: []optics.Waist{}, Samples: []optics.BeamSample{}}
+	out := &optics.BeamReport{WavelengthNM: b.WavelengthNM, M2: b.M2, Elements: []optics.BeamAt{}, Waists: []optics.Waist{}, Samples: []optics.BeamSample{},
+		Output: b.Output, GlassWaists: []optics.GlassWaist{}}
+	for _, w := range b.GlassWaists {
+		if ids[w.Element] {
+			out.GlassWaists = append(out.GlassWaists, w)
+		}
+	}
 	for _, e := range b.Elements {
 		if ids[e.ID] {
 			out.Elements = append(out.Elements, e)

@@ -90,6 +90,9 @@ func Propagate(b *optics.Bench, p *optics.Path) (*optics.BeamReport, []optics.Wa
 	}
 	rep.Waists = waists(p, g, st, &t, &s)
 	rep.Samples = samples(p, g, st, &t, &s)
+	rep.Output = outputBeam(p, g, st, &t, &s)
+	rep.GlassWaists = glassWaists(p, g, st, &t, &s)
+	warns = append(warns, screenFocusWarnings(b, p, &t, &s)...)
 	warns = append(warns, beamFocusWarnings(p, g, st, &t, &s)...)
 	return rep, warns
 }

@@ -48,23 +48,18 @@ func waists(p *optics.Path, g gaussian, st []stretch, t, s *planeTrace) []optics
 			ss = append(ss, w)
 		}
 	}
-	out := make([]optics.Waist, 0, len(ws)+len(ss))
-	used := make([]bool, len(ss))
-	for _, w := range ws {
-		e := optics.Waist{After: upstreamID(p, w.stretch), PathMM: w.zMM, RadiusTMM: ptr(w.radiusMM), RayleighTMM: ptr(w.rayleighMM)}
-		for j, v := range ss {
-			if !used[j] && v.stretch == w.stretch && sameZ(v.zMM, w.zMM) {
-				used[j] = true
-				e.RadiusSMM, e.RayleighSMM = ptr(v.radiusMM), ptr(v.rayleighMM)
-				break
-			}
+	pairs := pairPlanes(ws, ss)
+	out := make([]optics.Waist, 0, len(pairs))
+	for _, pr := range pairs {
+		w := pr.either()
+		e := optics.Waist{After: upstreamID(p, w.stretch), PathMM: w.zMM}
+		if pr.t != nil {
+			e.RadiusTMM, e.RayleighTMM = ptr(pr.t.radiusMM), ptr(pr.t.rayleighMM)
+		}
+		if pr.s != nil {
+			e.RadiusSMM, e.RayleighSMM = ptr(pr.s.radiusMM), ptr(pr.s.rayleighMM)
 		}
 		out = append(out, e)
-	}
-	for j, v := range ss {
-		if !used[j] {
-			out = append(out, optics.Waist{After: upstreamID(p, v.stretch), PathMM: v.zMM, RadiusSMM: ptr(v.radiusMM), RayleighSMM: ptr(v.rayleighMM)})
-		}
 	}
 	slices.SortStableFunc(out, func(a, b optics.Waist) int {
 		switch {
@@ -75,6 +70,42 @@ func waists(p *optics.Path, g gaussian, st []stretch, t, s *planeTrace) []optics
 		}
 		return 0
 	})
+	return out
+}
+
+// planePair is one waist entry: the tangential and the sagittal waist at one position, either
+// nil when that plane has no waist there.
+type planePair struct{ t, s *planeWaist }
+
+// either is the waist of a plane that has one.
+func (pr planePair) either() planeWaist {
+	if pr.t != nil {
+		return *pr.t
+	}
+	return *pr.s
+}
+
+// pairPlanes joins a tangential and a sagittal waist in one stretch at one position; the other
+// waists stand alone, the tangential ones first.
+func pairPlanes(ts, ss []planeWaist) []planePair {
+	out := make([]planePair, 0, len(ts)+len(ss))
+	used := make([]bool, len(ss))
+	for i := range ts {
+		pr := planePair{t: &ts[i]}
+		for j := range ss {
+			if !used[j] && ss[j].stretch == ts[i].stretch && sameZ(ss[j].zMM, ts[i].zMM) {
+				used[j] = true
+				pr.s = &ss[j]
+				break
+			}
+		}
+		out = append(out, pr)
+	}
+	for j := range ss {
+		if !used[j] {
+			out = append(out, planePair{s: &ss[j]})
+		}
+	}
 	return out
 }
 

@@ -103,6 +103,9 @@ func Analyze(b *optics.Bench, p *optics.Path, k int, plane Plane) Result {
 	res.Values.ImageNA = ptr(math.Abs(res.Marginal[last].NU))
 
 	v := &res.Values
+	if *v.ImageNA > 0 {
+		v.WorkingFNumber = ptr(1 / (2 * *v.ImageNA))
+	}
 	if point {
 		if *v.ImageNA > 0 {
 			v.FNumber = ptr(1 / (2 * *v.ImageNA))
