@@ -23,9 +23,17 @@ func writeText(w io.Writer, r *optics.Report) error {
 		wavelengths[i] = c.In(tables.Text)
 	}
 	fmt.Fprintf(tw, "wavelengths\t%s nm (first is primary)\n", strings.Join(wavelengths, ", "))
-	for _, s := range t.In(tables.Text) {
+	for _, s := range t.Lead(tables.Text) {
 		fmt.Fprint(tw, "\n")
 		writeSection(tw, s)
+	}
+	// A bench with a beam opens with it; the lens-design values follow under their own heading.
+	if design := t.Design(tables.Text); len(design) > 0 {
+		fmt.Fprint(tw, "\nLENS DESIGN VALUES\n")
+		for _, s := range design {
+			fmt.Fprint(tw, "\n")
+			writeSection(tw, s)
+		}
 	}
 	return tw.Flush()
 }

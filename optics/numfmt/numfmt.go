@@ -25,7 +25,8 @@ const (
 	// Rough is three significant digits as %g writes them: distances and angles in the beam's
 	// safety and breakdown warnings.
 	Rough
-	// Report is six significant digits as %g writes them (an exponent below 1e-4 and from 1e6):
+	// Report is six significant digits as %g writes them (an exponent below 1e-4 and from 1e6), 0
+	// for rounding noise below NoiseBelow (and -0):
 	// the text report.
 	Report
 	// Panel is five significant digits, an exponent only below 1e-4 or from 1e9, "0" for
@@ -61,6 +62,9 @@ func (p Precision) Format(v float64) string {
 	case Rough:
 		return strconv.FormatFloat(v, 'g', 3, 64)
 	case Report:
+		if IsNoise(v) {
+			return "0"
+		}
 		return strconv.FormatFloat(v, 'g', 6, 64)
 	case Panel:
 		if !finite(v) {
@@ -144,3 +148,10 @@ func scaleRound(v float64, n int) float64 {
 }
 
 func finite(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }
+
+// NoiseBelow is the magnitude under which the report and the page write a value as 0: sums of
+// lengths in mm that are really 0 come out as 1e-15 or -0, and no bench quantity is this small.
+const NoiseBelow = 1e-12
+
+// IsNoise says v is rounding noise: its magnitude is below NoiseBelow.
+func IsNoise(v float64) bool { return math.Abs(v) < NoiseBelow }

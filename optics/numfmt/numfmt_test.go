@@ -22,6 +22,8 @@ func TestFormat(t *testing.T) {
 		{Brief, 25.4, "25.4"}, {Brief, 12345, "1.234e+04"}, {Brief, 0.04, "0.04"},
 		{Rough, 0.00512, "0.00512"}, {Rough, 1234, "1.23e+03"},
 		{Report, -41.56187, "-41.5619"}, {Report, 0.000349066, "0.000349066"}, {Report, 1234567, "1.23457e+06"},
+		// Rounding noise of a length that is really 0 (common practice: no bench length is 1e-12 mm).
+		{Report, math.Copysign(0, -1), "0"}, {Report, -1.4e-15, "0"}, {Report, 2e-12, "2e-12"},
 		{Panel, 0, "0"}, {Panel, negZero, "0"}, {Panel, 1e-20, "1e-20"}, {Panel, 130.1749, "130.17"},
 		{Panel, -41.5617, "-41.562"}, {Panel, 0.000349071, "0.00034907"}, {Panel, 123456.7, "123460"},
 		{Panel, math.NaN(), "—"}, {Panel, math.Inf(1), "—"},

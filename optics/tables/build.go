@@ -1,11 +1,15 @@
 package tables
 
-import "raytable/optics"
+import (
+	"math"
+
+	"raytable/optics"
+)
 
 // Build lays a report out as tables. It reads the report only; sections without anything to show
 // for this bench (a second wavelength, spacing, blur, a beam, placement, media) are left out.
 func Build(r *optics.Report) *Report {
-	t := &Report{Title: r.Title, Warnings: r.Warnings}
+	t := &Report{Title: r.Title, Warnings: r.Warnings, beamFirst: r.Beam != nil}
 	for _, w := range r.WavelengthsNM {
 		t.Wavelengths = append(t.Wavelengths, val(w))
 	}
@@ -13,7 +17,7 @@ func Build(r *optics.Report) *Report {
 	if len(r.Chromatic) > 1 {
 		t.add(chromaticSection(r.Chromatic))
 	}
-	t.add(elementsSection(r.Elements))
+	t.add(elementsSection(r.Elements, onAxisOnly(&r.System)))
 	if len(r.Arms) > 1 {
 		t.add(armsSection(r.Arms))
 		t.add(armElementsSection(r.Arms))
@@ -25,11 +29,17 @@ func Build(r *optics.Report) *Report {
 	t.add(rayStatusSection(r.Rays))
 	t.add(stoppedRaysSection(r.Rays))
 	if len(r.Blur) > 0 {
-		t.add(blurSection(r.Blur))
+		t.add(blurSection(r.Blur, !collimated(&r.System.PlaneValues) && !virtualImage(&r.System.PlaneValues)))
 	}
 	if r.Beam != nil {
 		t.add(beamSection(r.Beam))
 		t.add(waistSection(r.Beam.Waists))
+		if len(r.Beam.GlassWaists) > 0 {
+			t.add(glassWaistSection(r.Beam.GlassWaists))
+		}
+		if r.Beam.Output != nil {
+			t.add(outputSection(r.Beam.Output))
+		}
 	}
 	if len(r.Placement) > 0 {
 		t.add(placementSection(r.Placement))
@@ -87,24 +97,61 @@ func systemSection(r *optics.Report) Section {
 	value := func(name string, u Unit, from *Origin, in Layout, get func(p *optics.PlaneValues) *float64) {
 		quantity(same(name), u, from, in, func(p *optics.PlaneValues) Cell { return optVal(get(p)) })
 	}
+	// focal is a value that a (nearly) afocal plane does not have: the text report and the page
+	// say the output is collimated instead of quoting a length of 10⁶ mm; the compare page keeps
+	// the number.
+	focal := func(name string, u Unit, from *Origin, get func(p *optics.PlaneValues) *float64) {
+		value(name, u, from, Compare, get)
+		quantity(same(name), u, from, Text|Page, func(p *optics.PlaneValues) Cell {
+			if collimated(p) {
+				return text(Words{Page: "collimated output", Text: "collimated"})
+			}
+			return optVal(get(p))
+		})
+	}
+	// finiteImage is a value that an image at infinity does not have (an f-number, an image NA).
+	finiteImage := func(name string, in Layout, get func(p *optics.PlaneValues) *float64) {
+		value(name, NoUnit, nil, in&Compare, get)
+		quantity(same(name), NoUnit, nil, in&(Text|Page), func(p *optics.PlaneValues) Cell {
+			if collimated(p) {
+				return absent(Undefined)
+			}
+			return optVal(get(p))
+		})
+	}
 	quantity(same("afocal"), NoUnit, nil, Text, func(p *optics.PlaneValues) Cell { return say(yesNo(p.Afocal)) })
-	value("EFL", MM, nil, Everywhere, func(p *optics.PlaneValues) *float64 { return p.EFLMM })
-	value("BFL", MM, nil, Everywhere, func(p *optics.PlaneValues) *float64 { return p.BFLMM })
-	value("FFL", MM, nil, Everywhere, func(p *optics.PlaneValues) *float64 { return p.FFLMM })
-	value("front principal plane", MM, usualFirst, Everywhere, func(p *optics.PlaneValues) *float64 { return p.FrontPrincipalMM })
-	value("rear principal plane", MM, usualLast, Everywhere, func(p *optics.PlaneValues) *float64 { return p.RearPrincipalMM })
-	value("image distance", MM, usualLast, Everywhere, func(p *optics.PlaneValues) *float64 { return p.ImageDistanceMM })
+	focal("EFL", MM, nil, func(p *optics.PlaneValues) *float64 { return p.EFLMM })
+	focal("BFL", MM, nil, func(p *optics.PlaneValues) *float64 { return p.BFLMM })
+	focal("FFL", MM, nil, func(p *optics.PlaneValues) *float64 { return p.FFLMM })
+	focal("front principal plane", MM, usualFirst, func(p *optics.PlaneValues) *float64 { return p.FrontPrincipalMM })
+	focal("rear principal plane", MM, usualLast, func(p *optics.PlaneValues) *float64 { return p.RearPrincipalMM })
+	focal("image distance", MM, usualLast, func(p *optics.PlaneValues) *float64 { return p.ImageDistanceMM })
 	value("magnification", NoUnit, nil, Everywhere, func(p *optics.PlaneValues) *float64 { return p.Magnification })
 	value("angular magnification", NoUnit, nil, Text|Page, func(p *optics.PlaneValues) *float64 { return p.AngularMagnification })
+	if r.Beam != nil && r.Beam.Output != nil && (collimated(&s.PlaneValues) || collimated(&s.Sagittal)) {
+		out := r.Beam.Output
+		quantity(same("output beam divergence"), MRad, nil, Text|Page, func(p *optics.PlaneValues) Cell {
+			w := out.T
+			if p == &s.Sagittal {
+				w = out.S
+			}
+			return val(w.DivergenceRad * 1000)
+		})
+	}
 	quantity(same("aperture stop"), NoUnit, nil, Everywhere, func(p *optics.PlaneValues) Cell { return say(p.ApertureStop) })
-	value("f-number", NoUnit, nil, Everywhere, func(p *optics.PlaneValues) *float64 { return p.FNumber })
-	value("image-side NA", NoUnit, nil, Everywhere, func(p *optics.PlaneValues) *float64 { return p.ImageNA })
+	finiteImage("f-number", Everywhere, func(p *optics.PlaneValues) *float64 { return p.FNumber })
+	finiteImage("working f-number", Text|Page, func(p *optics.PlaneValues) *float64 { return p.WorkingFNumber })
+	finiteImage("image-side NA", Everywhere, func(p *optics.PlaneValues) *float64 { return p.ImageNA })
 	value("entrance pupil", MM, firstVertex, Text|Page, func(p *optics.PlaneValues) *float64 { return p.EntrancePupilMM })
 	value("entrance pupil radius", MM, nil, Text|Page, func(p *optics.PlaneValues) *float64 { return p.EntrancePupilRadiusMM })
 	value("exit pupil", MM, lastVertex, Text|Page, func(p *optics.PlaneValues) *float64 { return p.ExitPupilMM })
 	value("exit pupil radius", MM, nil, Text|Page, func(p *optics.PlaneValues) *float64 { return p.ExitPupilRadiusMM })
 	value("image height", MM, nil, Page, func(p *optics.PlaneValues) *float64 { return p.ImageHeightMM })
-	value("Lagrange invariant", MM, nil, Text|Page, func(p *optics.PlaneValues) *float64 { return p.LagrangeInvariant })
+	lagrange := Text | Page
+	if onAxisOnly(s) {
+		lagrange = 0 // no chief ray, so no invariant to speak of
+	}
+	value("Lagrange invariant", MM, nil, lagrange, func(p *optics.PlaneValues) *float64 { return p.LagrangeInvariant })
 	// The optical part's extent along the path is one value for both planes.
 	if shown.Has(Text) {
 		sec.Rows = append(sec.Rows, Row{Label: same("optical part path"), Unit: MM, In: Text,
@@ -130,6 +177,27 @@ func chromaticSection(cs []optics.Cardinal) Section {
 			Cells: []Cell{val(c.WavelengthNM), optVal(c.EFLMM), optVal(c.BFLMM), optVal(c.ImageDistanceMM)}})
 	}
 	return sec
+}
+
+// NearlyAfocalEFLMM is the focal length beyond which the text report and the page treat a plane
+// as afocal, |power| below 1e-6 per mm: a longer one is a collimated output on any table, and the
+// validation's largest length (optics.MaxLengthMM).
+const NearlyAfocalEFLMM = optics.MaxLengthMM
+
+// collimated says the plane sends parallel light out: afocal, or an EFL beyond NearlyAfocalEFLMM.
+func collimated(p *optics.PlaneValues) bool {
+	return p.Afocal || p.EFLMM == nil || !(math.Abs(*p.EFLMM) < NearlyAfocalEFLMM)
+}
+
+// virtualImage says the image lies upstream of the last vertex.
+func virtualImage(p *optics.PlaneValues) bool {
+	return p.ImageDistanceMM != nil && *p.ImageDistanceMM < 0
+}
+
+// onAxisOnly says the bench's only field is on axis: the chief ray is a unit ray that only locates
+// the pupils, and the Lagrange invariant is 0 (see optics/paraxial).
+func onAxisOnly(s *optics.SystemValues) bool {
+	return s.Optical && s.LagrangeInvariant != nil && *s.LagrangeInvariant == 0
 }
 
 func yesNo(b bool) string {

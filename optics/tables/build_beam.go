@@ -6,32 +6,45 @@ import (
 	"raytable/optics"
 )
 
-// beamSection is the Gaussian beam leaving each element; elements passing less than 99 % of the
-// power are marked.
+// beamColumn is one column of the beam table with the cell it holds for an element's row.
+type beamColumn struct {
+	Column
+	cell func(e optics.BeamAt) Cell
+}
+
+// beamColumns are the beam table's columns in order: the radii arriving at and leaving each
+// element, the wavefront radii, and the share of the arriving power its apertures pass. Power
+// columns (the share of the source's power, peak irradiance) belong at the end of this list.
+var beamColumns = []beamColumn{
+	{Column{Head: Words{Page: "id"}, In: Text | Page}, func(e optics.BeamAt) Cell { return say(e.ID) }},
+	{Column{Head: Words{Page: "arriving, in plane", Text: "arriving w_t"}, Unit: MM, In: Text | Page}, func(e optics.BeamAt) Cell { return val(e.ArrivingWTMM) }},
+	{Column{Head: Words{Page: "arriving, across", Text: "arriving w_s"}, Unit: MM, In: Text | Page}, func(e optics.BeamAt) Cell { return val(e.ArrivingWSMM) }},
+	{Column{Head: Words{Page: "leaving, in plane", Text: "w_t", Compare: "beam radius in plane"}, Unit: MM, In: Everywhere}, func(e optics.BeamAt) Cell { return val(e.WTMM) }},
+	{Column{Head: Words{Page: "leaving, across", Text: "w_s", Compare: "beam radius across"}, Unit: MM, In: Everywhere}, func(e optics.BeamAt) Cell { return val(e.WSMM) }},
+	{Column{Head: Words{Page: "wavefront radius in plane", Text: "R_t"}, Unit: MM, In: Text | Page}, func(e optics.BeamAt) Cell { return opt(e.RTMM, Value, Flat) }},
+	{Column{Head: Words{Page: "wavefront radius across", Text: "R_s"}, Unit: MM, In: Text | Page}, func(e optics.BeamAt) Cell { return opt(e.RSMM, Value, Flat) }},
+	{Column{Head: Words{Page: "power passed", Text: "transmitted", Compare: "power passed"}, Unit: Percent, In: Everywhere}, func(e optics.BeamAt) Cell { return num(e.Transmitted, Fraction) }},
+}
+
+// beamSection is the Gaussian beam at each element, its 1/e² radii arriving and leaving; elements
+// passing less than 99 % of the power are marked.
 func beamSection(b *optics.BeamReport) Section {
 	sec := Section{
 		Name: Beam,
 		Title: Phrase{
-			Words: Words{Page: "Laser beam at %[1]s nm, M² %[2]s (leaving each element)", Text: "BEAM at %[1]s nm, M² %[2]s"},
+			Words: Words{Page: "Laser beam at %[1]s nm, M² %[2]s: 1/e² radius at each element", Text: "BEAM at %[1]s nm, M² %[2]s"},
 			Args:  []Cell{val(b.WavelengthNM), val(b.M2)},
 		},
-		Columns: []Column{
-			{Head: Words{Page: "id"}, In: Text | Page},
-			{Head: Words{Page: "radius in plane", Text: "w_t", Compare: "beam radius in plane"}, Unit: MM, In: Everywhere},
-			{Head: Words{Page: "radius across", Text: "w_s", Compare: "beam radius across"}, Unit: MM, In: Everywhere},
-			{Head: Words{Page: "wavefront radius in plane", Text: "R_t"}, Unit: MM, In: Text | Page},
-			{Head: Words{Page: "wavefront radius across", Text: "R_s"}, Unit: MM, In: Text | Page},
-			{Head: Words{Page: "power passed", Text: "transmitted", Compare: "power passed"}, Unit: Percent, In: Everywhere},
-		},
+	}
+	for _, c := range beamColumns {
+		sec.Columns = append(sec.Columns, c.Column)
 	}
 	for _, e := range b.Elements {
-		sec.Rows = append(sec.Rows, Row{
-			Key: e.ID,
-			Cells: []Cell{say(e.ID), val(e.WTMM), val(e.WSMM), opt(e.RTMM, Value, Flat), opt(e.RSMM, Value, Flat),
-				num(e.Transmitted, Fraction)},
-			Marked: e.Transmitted < 0.99,
-			In:     Everywhere,
-		})
+		row := Row{Key: e.ID, Marked: e.Transmitted < 0.99, In: Everywhere}
+		for _, c := range beamColumns {
+			row.Cells = append(row.Cells, c.cell(e))
+		}
+		sec.Rows = append(sec.Rows, row)
 	}
 	return sec
 }
@@ -67,7 +80,57 @@ func waistSection(ws []optics.Waist) Section {
 		})
 	}
 	if len(ws) == 0 {
-		sec.Note.Words.Page = "No waist between the source and the last element."
+		sec.Note.Words.Page = "No waist in air between the source and the last element."
 	}
+	return sec
+}
+
+// glassWaistSection lists the waists inside glass, their depth from the face the beam entered and
+// the Rayleigh range in the glass.
+func glassWaistSection(ws []optics.GlassWaist) Section {
+	sec := Section{
+		Name:  GlassWaists,
+		Title: Phrase{Words: Words{Page: "Beam waists inside glass", Text: "WAISTS IN GLASS"}},
+		Columns: []Column{
+			{Head: Words{Page: "element", Text: "in"}, In: Text | Page},
+			{Head: Words{Page: "depth from the entry face", Text: "depth"}, Unit: MM, In: Text | Page},
+			{Head: same("index"), In: Text | Page},
+			{Head: Words{Page: "radius in plane", Text: "radius t"}, Unit: MM, In: Text | Page},
+			{Head: Words{Page: "radius across", Text: "radius s"}, Unit: MM, In: Text | Page},
+			{Head: Words{Page: "Rayleigh range in the glass, in plane", Text: "Rayleigh t"}, Unit: MM, In: Text | Page},
+			{Head: Words{Page: "Rayleigh range in the glass, across", Text: "Rayleigh s"}, Unit: MM, In: Text | Page},
+		},
+		Note: Phrase{Words: Words{Page: "The Rayleigh range in glass of index n is π·w0²·n/(M²·λ)."}},
+	}
+	for _, w := range ws {
+		sec.Rows = append(sec.Rows, Row{In: Text | Page, Cells: []Cell{say(w.Element), val(w.DepthMM), num(w.Index, Index),
+			optVal(w.RadiusTMM), optVal(w.RadiusSMM), optVal(w.RayleighTMM), optVal(w.RayleighSMM)}})
+	}
+	return sec
+}
+
+// outputSection is the beam leaving the last element, one quantity per row, both planes.
+func outputSection(o *optics.BeamOutput) Section {
+	sec := Section{
+		Name:       BeamOutput,
+		Title:      Phrase{Words: Words{Page: "Output beam, leaving %[1]s", Text: "OUTPUT BEAM leaving %[1]s"}, Args: []Cell{say(o.After)}},
+		Transposed: true,
+		LabelHead:  Words{Page: "value"},
+		Columns: []Column{
+			{Head: Words{Page: "in the table plane", Text: "tangential"}, In: Text | Page},
+			{Head: Words{Page: "across it (sagittal)", Text: "sagittal"}, In: Text | Page},
+		},
+		Note:  Phrase{Words: Words{Page: "A negative waist position is a virtual waist: the beam already spreads from a point upstream. Divergence M²·λ/(π·w0), the far-field half-angle."}},
+		Agree: "Both planes agree.",
+	}
+	from := &Origin{Point: o.After}
+	add := func(name string, u Unit, origin *Origin, get func(w optics.OutputWaist) float64) {
+		sec.Rows = append(sec.Rows, Row{Label: same(name), Unit: u, From: origin, In: Text | Page,
+			Cells: []Cell{val(get(o.T)), val(get(o.S))}})
+	}
+	add("waist", MM, from, func(w optics.OutputWaist) float64 { return w.FromLastMM })
+	add("waist radius", MM, nil, func(w optics.OutputWaist) float64 { return w.RadiusMM })
+	add("Rayleigh range", MM, nil, func(w optics.OutputWaist) float64 { return w.RayleighMM })
+	add("divergence", MRad, nil, func(w optics.OutputWaist) float64 { return w.DivergenceRad * 1000 })
 	return sec
 }

@@ -9,7 +9,12 @@ import (
 
 // elementsSection is where each element sits and how the rays pass it. Rows where exact rays
 // reach beyond the clear aperture are marked.
-func elementsSection(es []optics.ElementPlace) Section {
+// A bench whose only field is on axis has no chief ray: its column is left out.
+func elementsSection(es []optics.ElementPlace, onAxis bool) Section {
+	chief := Everywhere
+	if onAxis {
+		chief = Compare
+	}
 	sec := Section{
 		Name:  Elements,
 		Title: Phrase{Words: Words{Page: "Elements", Text: "ELEMENTS"}},
@@ -22,7 +27,7 @@ func elementsSection(es []optics.ElementPlace) Section {
 			{Head: Words{Page: "heading in → out", Text: "heading in/out"}, Unit: Deg, In: Text | Page},
 			{Head: Words{Compare: "heading out"}, Unit: Deg, In: Compare},
 			{Head: Words{Page: "marginal ray", Text: "marginal y", Compare: "marginal ray"}, Unit: MM, In: Everywhere},
-			{Head: Words{Page: "chief ray", Text: "chief y", Compare: "chief ray"}, Unit: MM, In: Everywhere},
+			{Head: Words{Page: "chief ray", Text: "chief y", Compare: "chief ray"}, Unit: MM, In: chief},
 			{Head: same("largest ray"), Unit: MM, In: Everywhere},
 			{Head: same("clear radius"), Unit: MM, In: Text | Page},
 			{Head: Words{Page: "use of aperture", Compare: "use of aperture"}, Unit: Percent, In: Page | Compare},

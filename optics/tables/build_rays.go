@@ -85,7 +85,9 @@ func stoppedRaysSection(rays []optics.Ray) Section {
 
 // blurSection is how widely each fan lands on each screen beside the Airy radius; rows where the
 // rays spread wider than a perfect image are marked.
-func blurSection(bs []optics.Blur) Section {
+// The Airy radius is left out (showAiry false) of the text report and the page for a collimated
+// or virtual image, which has no diffraction spot on the screen.
+func blurSection(bs []optics.Blur, showAiry bool) Section {
 	sec := Section{
 		Name:  Blur,
 		Title: Phrase{Words: Words{Page: "Image blur at the screens", Text: "BLUR AT SCREENS"}},
@@ -102,7 +104,7 @@ func blurSection(bs []optics.Blur) Section {
 	}
 	for _, b := range bs {
 		airy := absent(Undefined)
-		if b.AiryRadiusMM != nil {
+		if b.AiryRadiusMM != nil && showAiry {
 			airy = val(*b.AiryRadiusMM * 1000)
 		}
 		sec.Rows = append(sec.Rows, Row{

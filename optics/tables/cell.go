@@ -127,6 +127,9 @@ func (c Cell) In(l Layout) string {
 	if l == Text {
 		return numfmt.Report.Format(v)
 	}
+	if l == Page && numfmt.IsNoise(v) {
+		return "0" // rounding noise of a value that is really 0; the compare page keeps every digit
+	}
 	return numfmt.Panel.Format(v)
 }
 

@@ -9,6 +9,9 @@ type Report struct {
 	Sections    []Section
 	Warnings    []optics.Warning
 	byName      map[Name]int
+	// beamFirst says the bench has a Gaussian beam: the text report and the page then open with
+	// it and keep the lens-design values for last (see Lead and Design).
+	beamFirst bool
 }
 
 // Name names a section; the page uses it as the table's data-testid.
@@ -31,6 +34,8 @@ const (
 	Arms         Name = "arms"
 	ArmElements  Name = "arm-elements"
 	Meetings     Name = "meetings"
+	BeamOutput   Name = "beam-output"
+	GlassWaists  Name = "glass-waists"
 )
 
 // arrangement is each layout's order of sections. A section that has nothing to show for a
@@ -41,10 +46,44 @@ var arrangement = map[Layout][]Name{
 	Compare: {System, Elements, Arms, ArmElements, Meetings, RayStatus, Blur, Spacing, Beam, Waists, Placement, WarningCount},
 }
 
-// In lists the sections layout l shows, in its order.
-func (r *Report) In(l Layout) []*Section {
+// beamLead and beamDesign are the text report's and the page's order for a bench with a Gaussian
+// beam: the beam at each element, its waists and the output beam, then where things go and the
+// warnings; the lens-design values after them. A layout missing here keeps its arrangement.
+var (
+	beamLead = map[Layout][]Name{
+		Text: {Beam, Waists, GlassWaists, BeamOutput, Elements, Arms, ArmElements, Meetings, Warnings},
+		Page: {Beam, Waists, GlassWaists, BeamOutput, Placement, Arms, ArmElements, Meetings},
+	}
+	beamDesign = map[Layout][]Name{
+		Text: {System, Chromatic, Spacing, Media, StoppedRays, Blur},
+		Page: {System, Chromatic, Elements, Spacing, RayStatus, Blur, Media},
+	}
+)
+
+// In lists the sections layout l shows, in its order: Lead then Design.
+func (r *Report) In(l Layout) []*Section { return append(r.Lead(l), r.Design(l)...) }
+
+// Lead lists the sections layout l opens with: for a bench with a beam the beam summary and
+// placement, otherwise every section.
+func (r *Report) Lead(l Layout) []*Section {
+	if names, ok := beamLead[l]; ok && r.beamFirst {
+		return r.named(names)
+	}
+	return r.named(arrangement[l])
+}
+
+// Design lists the lens-design sections that layout l shows after the lead, in their own part;
+// none for a bench without a beam, whose lead holds everything.
+func (r *Report) Design(l Layout) []*Section {
+	if names, ok := beamDesign[l]; ok && r.beamFirst {
+		return r.named(names)
+	}
+	return nil
+}
+
+func (r *Report) named(names []Name) []*Section {
 	var out []*Section
-	for _, n := range arrangement[l] {
+	for _, n := range names {
 		if i, ok := r.byName[n]; ok {
 			out = append(out, &r.Sections[i])
 		}
