@@ -14,8 +14,10 @@ import (
 // TestBlurTable lays out blur rows: values in micrometres, arriving rays as "n of m", a row wider
 // than its Airy radius marked, and a row with no finite image showing a dash for the Airy radius.
 func TestBlurTable(t *testing.T) {
-	airy := 0.016
-	r := &optics.Report{Blur: []optics.Blur{
+	airy, efl := 0.016, 100.0
+	// A focusing system: a collimated or virtual image would show no Airy radius at all.
+	focusing := optics.SystemValues{PlaneValues: optics.PlaneValues{Cardinal: optics.Cardinal{EFLMM: &efl}}, Optical: true}
+	r := &optics.Report{System: focusing, Blur: []optics.Blur{
 		{Element: "CAM", Field: "0 deg", WavelengthNM: 632.8, Rays: 21, Traced: 21, RMSMM: 0.0092, PeakMM: 0.0223, AiryRadiusMM: &airy},
 		{Element: "CAM", Field: "0 deg", WavelengthNM: 532, Rays: 18, Traced: 21, RMSMM: 0.0657, PeakMM: 0.1177, AiryRadiusMM: &airy},
 		{Element: "CARD", Field: "1 mm", WavelengthNM: 532, Rays: 21, Traced: 21, RMSMM: 0.5, PeakMM: 0.9},

@@ -95,10 +95,12 @@ type Row struct {
 	Marked bool
 }
 
-// Numbers is the numbers panel: tables, then warnings in plain words.
+// Numbers is the numbers panel: tables, then warnings in plain words, then for a bench with a
+// beam the lens-design tables, folded shut.
 type Numbers struct {
 	Tables   []Table
 	Warnings []string
+	Design   []Table
 }
 
 // Result is what one computation shows: the two diagrams (inline SVG) and the numbers.

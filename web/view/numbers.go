@@ -8,11 +8,16 @@ import (
 )
 
 // NumbersPanel lays out a report as the tables of the numbers panel: the sections optics/tables
-// builds for the page, then the warnings in plain words.
+// builds for the page, then the warnings in plain words; for a bench with a beam the lens-design
+// sections come after the warnings.
 func NumbersPanel(r *optics.Report) Numbers {
 	var n Numbers
-	for _, s := range tables.Build(r).In(tables.Page) {
+	t := tables.Build(r)
+	for _, s := range t.Lead(tables.Page) {
 		n.Tables = append(n.Tables, pageTable(s))
+	}
+	for _, s := range t.Design(tables.Page) {
+		n.Design = append(n.Design, pageTable(s))
 	}
 	for _, w := range r.Warnings {
 		n.Warnings = append(n.Warnings, warningText(w))
