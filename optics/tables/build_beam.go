@@ -123,14 +123,13 @@ func outputSection(o *optics.BeamOutput) Section {
 		Note:  Phrase{Words: Words{Page: "A negative waist position is a virtual waist: the beam already spreads from a point upstream. Divergence M²·λ/(π·w0), the far-field half-angle."}},
 		Agree: "Both planes agree.",
 	}
-	from := &Origin{Point: o.After}
-	add := func(name string, u Unit, origin *Origin, get func(w optics.OutputWaist) float64) {
-		sec.Rows = append(sec.Rows, Row{Label: same(name), Unit: u, From: origin, In: Text | Page,
+	add := func(name string, u Unit, get func(w optics.OutputWaist) float64) {
+		sec.Rows = append(sec.Rows, Row{Label: same(name), Unit: u, In: Text | Page,
 			Cells: []Cell{val(get(o.T)), val(get(o.S))}})
 	}
-	add("waist", MM, from, func(w optics.OutputWaist) float64 { return w.FromLastMM })
-	add("waist radius", MM, nil, func(w optics.OutputWaist) float64 { return w.RadiusMM })
-	add("Rayleigh range", MM, nil, func(w optics.OutputWaist) float64 { return w.RayleighMM })
-	add("divergence", MRad, nil, func(w optics.OutputWaist) float64 { return w.DivergenceRad * 1000 })
+	add("waist beyond "+o.After, MM, func(w optics.OutputWaist) float64 { return w.FromLastMM })
+	add("waist radius", MM, func(w optics.OutputWaist) float64 { return w.RadiusMM })
+	add("Rayleigh range", MM, func(w optics.OutputWaist) float64 { return w.RayleighMM })
+	add("far-field divergence", MRad, func(w optics.OutputWaist) float64 { return w.DivergenceRad * 1000 })
 	return sec
 }
