@@ -1,7 +1,5 @@
 package optics
 
-
-
 // The rules of fibre sources, fibres, mode targets, cylindrical lenses and a beam's vertical
 // plane (README, "Fibres, mode targets and cylindrical lenses").
 
@@ -83,4 +81,3 @@ func (v *checker) cylinder(p string, e *Element) {
 		v.add(field(p, "cylinder_axis"), "must be %s, got %q", quotedList([]string{CylinderVertical, CylinderHorizontal}), e.CylinderAxis)
 	}
 }
-
