@@ -31,6 +31,9 @@ func Build(r *optics.Report) *Report {
 		t.add(beamSection(r.Beam))
 		t.add(waistSection(r.Beam.Waists))
 	}
+	if len(r.Coupling) > 0 {
+		t.add(couplingSection(r.Coupling))
+	}
 	if len(r.Placement) > 0 {
 		t.add(placementSection(r.Placement))
 	}

@@ -31,14 +31,15 @@ const (
 	Arms         Name = "arms"
 	ArmElements  Name = "arm-elements"
 	Meetings     Name = "meetings"
+	Coupling     Name = "coupling" // sources and targets
 )
 
 // arrangement is each layout's order of sections. A section that has nothing to show for a
 // bench (no beam, one wavelength) is not built and so not shown.
 var arrangement = map[Layout][]Name{
-	Text:    {System, Chromatic, Elements, Arms, ArmElements, Meetings, Spacing, Media, StoppedRays, Blur, Beam, Waists, Warnings},
-	Page:    {System, Chromatic, Elements, Arms, ArmElements, Meetings, Spacing, RayStatus, Blur, Beam, Waists, Placement, Media},
-	Compare: {System, Elements, Arms, ArmElements, Meetings, RayStatus, Blur, Spacing, Beam, Waists, Placement, WarningCount},
+	Text:    {System, Chromatic, Elements, Arms, ArmElements, Meetings, Spacing, Media, StoppedRays, Blur, Beam, Waists, Coupling, Warnings},
+	Page:    {System, Chromatic, Elements, Arms, ArmElements, Meetings, Spacing, RayStatus, Blur, Beam, Waists, Coupling, Placement, Media},
+	Compare: {System, Elements, Arms, ArmElements, Meetings, RayStatus, Blur, Spacing, Beam, Waists, Coupling, Placement, WarningCount},
 }
 
 // In lists the sections layout l shows, in its order.
