@@ -112,10 +112,11 @@ func Couplings(b *optics.Bench, p *optics.Path) []optics.Coupling {
 	lam := p.WavelengthsNM[0]
 	mode := newGaussian(lam, 1)
 	var out []optics.Coupling
+	lit := litStretches(p) // nothing passes a dump
 	for ei, sp := range p.Spans {
 		e := &b.Elements[ei]
 		tab, ver, ok := e.TargetPlanes()
-		if !ok || sp.First < 0 || sp.First >= len(p.Surfaces) {
+		if !ok || sp.First < 0 || sp.First >= len(p.Surfaces) || sp.First >= lit {
 			continue
 		}
 		qt, qs := t.arrive[sp.First], s.arrive[sp.First]
