@@ -1,5 +1,7 @@
 package optics
 
+import "math"
+
 // FormatBenchV1 is the value of Bench.Format for version 1 of the bench file.
 const FormatBenchV1 = "raytable/bench/v1"
 
@@ -8,14 +10,16 @@ const MaxElements = 200
 
 // Element types.
 const (
-	TypeLens      = "lens"      // one or more refracting faces with glass between them
-	TypeThinLens  = "thin-lens" // an ideal lens of given focal length at one plane
-	TypeMirror    = "mirror"    // a flat or spherical mirror that turns the beam on the table
-	TypeAperture  = "aperture"  // an iris or slit of given clear diameter
-	TypeScreen    = "screen"    // a detector or viewing card: records rays, stops nothing
-	TypeDump      = "dump"      // a beam dump: the end of the beam
-	TypeSplitter  = "splitter"  // a beam splitter, pick-off or dichroic: part of the light turns into its reflected arm
-	TypePeriscope = "periscope" // two 45° flat mirrors that lift or lower the beam and may turn it
+	TypeLens       = "lens"        // one or more refracting faces with glass between them
+	TypeThinLens   = "thin-lens"   // an ideal lens of given focal length at one plane
+	TypeMirror     = "mirror"      // a flat or spherical mirror that turns the beam on the table
+	TypeAperture   = "aperture"    // an iris or slit of given clear diameter
+	TypeScreen     = "screen"      // a detector or viewing card: records rays, stops nothing
+	TypeDump       = "dump"        // a beam dump: the end of the beam
+	TypeSplitter   = "splitter"    // a beam splitter, pick-off or dichroic: part of the light turns into its reflected arm
+	TypePeriscope  = "periscope"   // two 45° flat mirrors that lift or lower the beam and may turn it
+	TypeFiber      = "fiber"       // a single-mode fibre face the beam is coupled into: the end of the beam
+	TypeModeTarget = "mode-target" // a mode the beam should match (a cavity mode, a crystal's design waist): the end of the beam
 )
 
 // Dichroic splitters send each wavelength wholly to one port.
@@ -31,6 +35,7 @@ const DefaultReflect = 0.5
 const (
 	SourceCollimated = "collimated"
 	SourcePoint      = "point"
+	SourceFiber      = "fiber" // a single-mode fibre's face: a Gaussian beam with its waist there
 )
 
 // Table grids.
@@ -97,6 +102,9 @@ type Source struct {
 	Beam    *Beam         `json:"beam,omitempty"`
 
 	HeightMM *float64 `json:"height_mm,omitempty"` // beam height above the table; table.beam_height_mm when absent
+
+	// sources and targets: a fibre source's mode field diameter (1/e² intensity) at the primary wavelength
+	MFDUM *float64 `json:"mfd_um,omitempty"`
 }
 
 // FanRayCount is the number of rays in each fan.
@@ -121,6 +129,16 @@ type Beam struct {
 	WaistRadiusMM float64  `json:"waist_radius_mm"` // 1/e² intensity radius of the real beam at its waist
 	WaistAtMM     float64  `json:"waist_at_mm"`     // waist position along the path from the source; negative is upstream
 	M2            *float64 `json:"m2,omitempty"`    // beam quality factor; 1 when absent
+
+	// sources and targets: the vertical plane's waist when it differs from the table plane's above
+	Sagittal *BeamPlane `json:"sagittal,omitempty"`
+}
+
+// BeamPlane is a Gaussian beam's waist in one plane: an elliptical or astigmatic beam's vertical plane.
+type BeamPlane struct {
+	WaistRadiusMM float64  `json:"waist_radius_mm"`
+	WaistAtMM     float64  `json:"waist_at_mm"`
+	M2            *float64 `json:"m2,omitempty"`
 }
 
 // BeamQuality is M², 1 when not given.
@@ -185,6 +203,17 @@ type Element struct {
 
 	// any type: footprint of the mount on the table
 	Mount *Mount `json:"mount,omitempty"`
+
+	// sources and targets: a lens or thin lens that is a cylinder, with its axis "vertical" (power in
+	// the table plane) or "horizontal" (power in the vertical plane)
+	CylinderAxis string `json:"cylinder_axis,omitempty"`
+	// fiber: the mode field diameter (1/e² intensity) of the fibre coupled into
+	MFDUM *float64 `json:"mfd_um,omitempty"`
+	// mode-target: the mode's waist, its position from the element's plane (+ downstream) and,
+	// when it differs, the vertical plane's
+	WaistRadiusMM *float64   `json:"waist_radius_mm,omitempty"`
+	WaistAtMM     *float64   `json:"waist_at_mm,omitempty"`
+	Sagittal      *BeamPlane `json:"sagittal,omitempty"`
 }
 
 // Dichroic is a splitter's wavelength edge: each wavelength on the Reflects side of EdgeNM is
@@ -221,4 +250,78 @@ func (e *Element) SemiDiameterMM() float64 {
 		return inf
 	}
 	return *e.DiameterMM / 2
+}
+
+// Cylinder axes of a cylindrical lens (sources and targets). A vertical axis gives the lens its
+// power in the table plane, a horizontal one in the vertical plane.
+const (
+	CylinderVertical   = "vertical"
+	CylinderHorizontal = "horizontal"
+)
+
+// Diverging reports whether the traced rays leave one point: a point source or a fibre's face.
+func (s *Source) Diverging() bool { return s.Kind == SourcePoint || s.Kind == SourceFiber }
+
+// ConeNA is the numerical aperture of the traced cone: na when given, else for a fibre the
+// divergence of its mode λ/(π w0) at the primary wavelength (the far-field 1/e² half-angle of a
+// Gaussian beam, Kogelnik and Li 1966); 0 when neither says.
+func (s *Source) ConeNA(primaryNM float64) float64 {
+	switch {
+	case s.NA != nil:
+		return *s.NA
+	case s.Kind == SourceFiber && s.MFDUM != nil && *s.MFDUM > 0:
+		return primaryNM * 1e-6 / (math.Pi * *s.MFDUM / 2000)
+	}
+	return 0
+}
+
+// GaussianBeam is the beam leaving the source: a fibre's mode, round with its waist on the face
+// (w0 = mfd/2), or source.beam; nil when there is none.
+func (s *Source) GaussianBeam() *Beam {
+	if s.Kind == SourceFiber && s.MFDUM != nil {
+		return &Beam{WaistRadiusMM: *s.MFDUM / 2000}
+	}
+	return s.Beam
+}
+
+// Planes are the beam's waists in the table plane and the vertical plane: the sagittal entry when
+// given, the table plane's otherwise.
+func (b *Beam) Planes() (table, vertical BeamPlane) {
+	table = BeamPlane{WaistRadiusMM: b.WaistRadiusMM, WaistAtMM: b.WaistAtMM, M2: b.M2}
+	if b.Sagittal != nil {
+		return table, *b.Sagittal
+	}
+	return table, table
+}
+
+// Quality is the plane's M², 1 when not given.
+func (b BeamPlane) Quality() float64 {
+	if b.M2 == nil {
+		return 1
+	}
+	return *b.M2
+}
+
+// IsTarget reports whether the element is a mode the beam is coupled into (a fibre or a mode target).
+func (e *Element) IsTarget() bool { return e.Type == TypeFiber || e.Type == TypeModeTarget }
+
+// TargetPlanes are a target's mode in the table plane and the vertical plane, waist positions from
+// the element's plane (+ downstream): a fibre's round waist mfd/2 on its face, or a mode target's
+// waist and sagittal entry. ok is false for other elements or a target missing its waist.
+func (e *Element) TargetPlanes() (table, vertical BeamPlane, ok bool) {
+	switch {
+	case e.Type == TypeFiber && e.MFDUM != nil:
+		table = BeamPlane{WaistRadiusMM: *e.MFDUM / 2000}
+	case e.Type == TypeModeTarget && e.WaistRadiusMM != nil:
+		table = BeamPlane{WaistRadiusMM: *e.WaistRadiusMM}
+		if e.WaistAtMM != nil {
+			table.WaistAtMM = *e.WaistAtMM
+		}
+	default:
+		return BeamPlane{}, BeamPlane{}, false
+	}
+	if e.Type == TypeModeTarget && e.Sagittal != nil {
+		return table, *e.Sagittal, true
+	}
+	return table, table, true
 }

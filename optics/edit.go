@@ -30,6 +30,9 @@ func DefaultElement(typ string) Element {
 func DefaultSource(kind string) Source {
 	s := SourceKindOrFirst(kind).Default()
 	s.Kind = kind
+	if kind == SourceFiber {
+		s.Beam = nil // a fibre's beam is its mode
+	}
 	return s
 }
 
@@ -159,5 +162,8 @@ func ChangeSourceKind(s Source, kind string) Source {
 		f.value(dst).Set(f.value(src))
 	}
 	s.Kind = kind
+	if kind == SourceFiber {
+		s.Beam = nil // a fibre's beam is its mode
+	}
 	return s
 }

@@ -43,6 +43,8 @@ type Field struct {
 	Absent    string // what an absent optional value means, as the history shows it: "none" unless set
 	Prose     bool   // free text: the history says only that it changed
 	Multiline bool   // text over several lines, or an object a form edits as its JSON: a text area
+
+	Choices []string // text that must be one of these words (a cylinder axis); nil: any text
 }
 
 // absentText is how the history shows a field that is not given: "flat" for a radius, the default
@@ -186,6 +188,13 @@ var (
 		{Key: "waist_radius_mm", Label: "waist radius (1/e²)", Quantity: Length, Required: true},
 		{Key: "waist_at_mm", Label: "waist position from the source", Quantity: Length}, // 0: the waist at the source
 		{Key: "m2", Label: "M² (empty: 1)", Quantity: Plain, Absent: "1"},
+		{Key: "sagittal", Label: "vertical plane (JSON: waist_radius_mm, waist_at_mm, m2; empty: as the table plane)", Multiline: true, Fields: BeamPlaneFields},
+	}
+	// BeamPlaneFields are one plane's waist: a beam's or a mode target's vertical plane (sources and targets).
+	BeamPlaneFields = []Field{
+		{Key: "waist_radius_mm", Label: "waist radius (1/e²)", Quantity: Length, Required: true},
+		{Key: "waist_at_mm", Label: "waist position", Quantity: Length},
+		{Key: "m2", Label: "M² (empty: 1)", Quantity: Plain, Absent: "1"},
 	}
 	MaterialFields = []Field{
 		{Key: "sellmeier", Fields: SellmeierFields},
@@ -248,6 +257,7 @@ var tables = map[reflect.Type][]Field{
 	reflect.TypeFor[Mount]():         MountFields,
 	reflect.TypeFor[Dichroic]():      DichroicFields,
 	reflect.TypeFor[MoreSource]():    MoreSourceFields,
+	reflect.TypeFor[BeamPlane]():     BeamPlaneFields, // sources and targets
 }
 
 // withKinds is common followed by the fields of every kind, each key once (see union).

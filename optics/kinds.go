@@ -45,10 +45,12 @@ var (
 		{Key: "thicknesses_mm", Label: "thicknesses (comma list)", Quantity: Length},
 		{Key: "materials", Label: "materials (comma list)"},
 		clearDiameter,
+		cylinderAxis,
 	}
 	thinLensFields = []Field{
 		{Key: "focal_mm", Label: "focal length", Quantity: Length, Required: true, Hint: "use a length such as 100 mm"},
 		clearDiameter,
+		cylinderAxis,
 	}
 	mirrorFields = []Field{
 		{Key: "radius_mm", Label: "radius (+ concave, flat)", Quantity: Length, Flat: true},
@@ -111,13 +113,13 @@ var Kinds = []Kind{
 		Default: func() Element {
 			return Element{FacesMM: []*float64{new(100.0), nil}, ThicknessesMM: []float64{4}, Materials: []string{"fused-silica"}, DiameterMM: new(25.4)}
 		},
-		check: (*checker).lens,
+		check: func(v *checker, p string, e *Element, ok bool) { v.lens(p, e, ok); v.cylinder(p, e) },
 	},
 	{
 		Type: TypeThinLens, Noun: "thin lens", Label: "thin lens", IDPrefix: "F", Fields: thinLensFields,
 		Mount:   lensMount,
 		Default: func() Element { return Element{FocalMM: new(100.0), DiameterMM: new(25.4)} },
-		check:   (*checker).thinLens,
+		check:   func(v *checker, p string, e *Element, ok bool) { v.thinLens(p, e, ok); v.cylinder(p, e) },
 	},
 	{
 		Type: TypeMirror, Noun: "mirror", Label: "mirror", IDPrefix: "M", Fields: mirrorFields,
@@ -155,7 +157,39 @@ var Kinds = []Kind{
 		Default: func() Element { return Element{RiseMM: new(50.0), TurnDeg: new(0.0), DiameterMM: new(25.4)} },
 		check:   (*checker).periscope,
 	},
+	// sources and targets
+	{
+		Type: TypeFiber, Noun: "fibre", Label: "fibre (single-mode, coupled into)", IDPrefix: "FC",
+		Fields: fiberFields, EndsPath: true, Mount: targetMount,
+		Default: func() Element { return Element{MFDUM: new(6.0), DiameterMM: new(2.5)} }, // a 2.5 mm ferrule
+		check:   (*checker).fiber,
+	},
+	{
+		Type: TypeModeTarget, Noun: "mode target", Label: "mode target (cavity mode, design waist)", IDPrefix: "T",
+		Fields: modeTargetFields, EndsPath: true, Mount: targetMount,
+		Default: func() Element { return Element{WaistRadiusMM: new(0.1), WaistAtMM: new(0.0)} },
+		check:   (*checker).modeTarget,
+	},
 }
+
+// The fields of cylindrical lenses, fibres and mode targets (sources and targets).
+var (
+	cylinderAxis = Field{Key: "cylinder_axis", Label: "cylinder axis (vertical or horizontal; empty: spherical)", Absent: "spherical",
+		Choices: []string{CylinderVertical, CylinderHorizontal}}
+	fiberFields = []Field{
+		{Key: "mfd_um", Label: "mode field diameter (1/e²)", Quantity: ModeDiameter, Required: true,
+			About: "its mode field diameter", Hint: "use the data sheet's value at the wavelength, e.g. 6 µm"},
+		clearDiameter,
+	}
+	modeTargetFields = []Field{
+		{Key: "waist_radius_mm", Label: "waist radius (1/e²)", Quantity: Length, Required: true,
+			About: "the waist radius of the mode", Hint: "use a length such as 0.1 mm"},
+		{Key: "waist_at_mm", Label: "waist position (+ downstream of the element)", Quantity: Length},
+		{Key: "sagittal", Label: "vertical plane (JSON: waist_radius_mm, waist_at_mm; empty: as the table plane)", Multiline: true, Fields: BeamPlaneFields},
+	}
+	// targetMount is a fibre connector or crystal holder on a post: a 30 mm block (our own round number).
+	targetMount = MountRule{MinWidthMM: 30, DepthMM: 25}
+)
 
 // KindOf finds the entry of an element type.
 func KindOf(typ string) (*Kind, bool) {

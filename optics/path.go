@@ -61,6 +61,9 @@ type Surface struct {
 	// The paraxial planes are the beam's own, so a tilted mirror there gives its table-plane
 	// power to the sagittal plane.
 	Swapped bool
+	// CylinderAxis is a cylindrical lens's axis on the table (optics.CylinderVertical: power in the
+	// table plane; CylinderHorizontal: in the vertical plane), "" for a spherical or flat face.
+	CylinderAxis string
 }
 
 // Span is the range of surfaces [First, Last] that belong to one element.
@@ -149,6 +152,7 @@ func BuildPath(b *Bench) *Path {
 		z += e.GapMM
 		first := len(p.Surfaces)
 		base := Surface{Element: ei, ID: e.ID, SemiAperture: e.SemiDiameterMM(), Index: air, Swapped: swapped}
+		base.CylinderAxis = e.CylinderAxis
 		switch e.Type {
 		case TypeLens:
 			for f, r := range e.FacesMM {

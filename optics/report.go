@@ -36,6 +36,9 @@ type Report struct {
 
 	// Board is the table seen from above as the drawings show it (see Board); not in the JSON.
 	Board *Board `json:"-"`
+
+	// sources and targets: the beam's coupling into each fibre and mode target it reaches
+	Coupling []Coupling `json:"coupling,omitempty"`
 }
 
 // MediumIndex is the index of one medium used on the bench at one wavelength.
@@ -344,4 +347,19 @@ type GlassWaist struct {
 	RadiusSMM   *float64 `json:"radius_s_mm"`
 	RayleighTMM *float64 `json:"rayleigh_t_mm"`
 	RayleighSMM *float64 `json:"rayleigh_s_mm"`
+}
+
+// Coupling is how much of the beam arriving at a fibre or mode target its mode accepts, and the
+// offsets of the target that each alone lose 1 dB of that (sources and targets; README "Fibres,
+// mode targets and cylindrical lenses"). Lateral and angular offsets are given per plane: the
+// table plane and the vertical one. The axial offset is nil when no shift up to 1000 Rayleigh
+// ranges of the mode loses 1 dB.
+type Coupling struct {
+	Element             string   `json:"element"`
+	Efficiency          float64  `json:"efficiency"` // power coupling |γ|², 0 to 1
+	AxialMM             *float64 `json:"axial_1db_mm"`
+	LateralMM           *float64 `json:"lateral_1db_mm"`
+	LateralVerticalMM   *float64 `json:"lateral_vertical_1db_mm"`
+	AngularMrad         *float64 `json:"angular_1db_mrad"`
+	AngularVerticalMrad *float64 `json:"angular_vertical_1db_mrad"`
 }

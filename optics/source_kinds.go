@@ -34,6 +34,15 @@ var SourceKinds = []SourceKind{
 		Default: func() Source { return Source{NA: new(0.1), ObjectHeightsMM: []float64{0}} },
 		check:   (*checker).pointSource,
 	},
+	{ // sources and targets
+		Kind: SourceFiber, Noun: "fibre source", Label: "fibre (single-mode face)",
+		Fields: []Field{
+			{Key: "mfd_um", Label: "mode field diameter (1/e²)", Quantity: ModeDiameter, Required: true, About: "its mode field diameter"},
+			{Key: "na", Label: "numerical aperture of the traced cone (empty: the mode's divergence)", Quantity: Plain, Absent: "the mode's"},
+		},
+		Default: func() Source { return Source{MFDUM: new(6.0)} },
+		check:   (*checker).fiberSource,
+	},
 }
 
 // SourceKindOf finds the entry of a source kind.

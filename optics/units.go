@@ -96,3 +96,8 @@ func isDigit(c byte) bool { return c >= '0' && c <= '9' }
 // FormatNumber writes a stored value as people edit it: the shortest text that Parse reads back to
 // the same float64, without exponents for everyday sizes.
 func FormatNumber(v float64) string { return numfmt.Field.Format(v) }
+
+// ModeDiameter is a fibre's mode field diameter, stored in µm as fibre data sheets give it
+// (sources and targets).
+var ModeDiameter = &Quantity{"a mode field diameter", "use a number in µm such as 5.3", "µm", map[string]float64{
+	"": 1, "um": 1, "µm": 1, "μm": 1, "mm": 1000}}

@@ -206,10 +206,9 @@ func (v *checker) sourceAt(path string, s *Source) {
 	if bm := s.Beam; bm != nil {
 		v.positive(at("beam.waist_radius_mm"), bm.WaistRadiusMM)
 		v.length(at("beam.waist_at_mm"), bm.WaistAtMM)
-		if bm.M2 != nil && v.finite(at("beam.m2"), *bm.M2) && *bm.M2 < 1 {
-			v.add(at("beam.m2"), "M² is at least 1 for any real beam, got %s", fmtNum(*bm.M2))
-		} else if bm.M2 != nil && *bm.M2 > MaxM2 {
-			v.add(at("beam.m2"), "M² of %s is beyond %s, where a Gaussian beam model no longer describes the light", fmtNum(*bm.M2), fmtNum(MaxM2))
+		v.beamQuality(at("beam.m2"), bm.M2)
+		if bm.Sagittal != nil {
+			v.beamPlane(at("beam.sagittal"), bm.Sagittal)
 		}
 	}
 	if s.HeightMM != nil {

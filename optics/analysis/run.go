@@ -81,6 +81,7 @@ func linear(b *optics.Bench, main, plan bool) *optics.Report {
 	var beamWarnings []optics.Warning
 	r.Beam, beamWarnings = beam.Propagate(b, p)
 	r.Warnings = append(r.Warnings, beamWarnings...)
+	r.Coupling = beam.Couplings(b, p)
 	r.Warnings = append(r.Warnings, beam.SafetyWarnings(b, p)...)
 
 	r.Holes = layout.Holes(b.Table).HoleGrid

@@ -25,7 +25,7 @@ const ParaxialLimitRad = 1.0
 // inside glass θ is the angle in air, larger than the angle in the glass: the test is on the safe
 // side.
 func breakdown(p *optics.Path, g gaussian, planes ...*planeTrace) (surface int, angleRad float64, broke bool) {
-	check := func(q complex128) (float64, bool) {
+	check := func(g gaussian, q complex128) (float64, bool) {
 		zr := imag(q)
 		if cmplx.IsNaN(q) || cmplx.IsInf(q) || !(zr > 0) {
 			return math.Inf(1), true
@@ -34,14 +34,14 @@ func breakdown(p *optics.Path, g gaussian, planes ...*planeTrace) (surface int, 
 		return theta, theta > ParaxialLimitRad
 	}
 	for _, t := range planes {
-		if a, bad := check(t.start); bad {
+		if a, bad := check(t.g, t.start); bad {
 			return -1, a, true
 		}
 	}
 	for i := range p.Surfaces {
 		for _, t := range planes {
 			for _, q := range []complex128{t.arrive[i], t.leave[i]} {
-				if a, bad := check(q); bad {
+				if a, bad := check(t.g, q); bad {
 					return i, a, true
 				}
 			}

@@ -121,7 +121,7 @@ func TestTransmittedAndWarning(t *testing.T) {
 	lrep, _ := Propagate(beamBench(hene, 1, 0, 1), lp)
 	g := newGaussian(hene, 1)
 	q0 := g.sourceQ(1, 0)
-	tr := trace(lp, 0, q0)
+	tr := trace(lp, 0, g, q0)
 	want := FractionInCircle(1.5, g.radiusMM(tr.arrive[0]), g.radiusMM(tr.arrive[0])) * FractionInCircle(1.5, g.radiusMM(tr.arrive[1]), g.radiusMM(tr.arrive[1]))
 	if got := row(lrep, "L").Transmitted; !approx.Abs(got, want, clipTol) || got >= FractionInCircle(1.5, g.radiusMM(tr.arrive[0]), g.radiusMM(tr.arrive[0])) {
 		t.Errorf("lens transmitted %v, want product %v", got, want)

@@ -21,6 +21,7 @@ const (
 
 // planeTrace is the reduced q of one plane just before and just after each surface's power.
 type planeTrace struct {
+	g             gaussian   // the plane's M²λ (a beam's vertical plane may have its own M²)
 	start         complex128 // at the source plane
 	arrive, leave []complex128
 }
@@ -35,8 +36,8 @@ func (t *planeTrace) at(i int) complex128 {
 
 // trace carries q through p in one plane at the primary wavelength, with the gap and surface
 // matrices of package paraxial (reduced form: q̂ = q/n obeys the ABCD law for them).
-func trace(p *optics.Path, plane paraxial.Plane, q0 complex128) planeTrace {
-	t := planeTrace{start: q0, arrive: make([]complex128, len(p.Surfaces)), leave: make([]complex128, len(p.Surfaces))}
+func trace(p *optics.Path, plane paraxial.Plane, g gaussian, q0 complex128) planeTrace {
+	t := planeTrace{g: g, start: q0, arrive: make([]complex128, len(p.Surfaces)), leave: make([]complex128, len(p.Surfaces))}
 	q := q0
 	for i := range p.Surfaces {
 		q = applyABCD(paraxial.GapMatrix(p, i, 0, plane), q)
@@ -51,28 +52,14 @@ func trace(p *optics.Path, plane paraxial.Plane, q0 complex128) planeTrace {
 // beam leaving every element, every real waist in air, the envelope for drawing, and warnings for
 // clipping and for beam foci in or next to glass. The report is nil when the source has no beam.
 func Propagate(b *optics.Bench, p *optics.Path) (*optics.BeamReport, []optics.Warning) {
-	if b == nil || p == nil || b.Source.Beam == nil {
+	if b == nil || p == nil || b.Source.GaussianBeam() == nil {
 		return nil, nil
 	}
-	bm := b.Source.Beam
-	m2 := bm.BeamQuality()
-	if len(p.WavelengthsNM) == 0 || !(p.WavelengthsNM[0] > 0) || !(bm.WaistRadiusMM > 0) || !(m2 > 0) ||
-		math.IsInf(bm.WaistRadiusMM, 0) || math.IsInf(m2, 0) || math.IsNaN(bm.WaistAtMM) || math.IsInf(bm.WaistAtMM, 0) {
-		return nil, []optics.Warning{{Code: CodeBeamInvalid, Message: "source.beam needs a positive finite waist_radius_mm and m2, a finite waist_at_mm and a positive wavelength; the beam was not computed"}}
+	t, s, warn := sourceTraces(b, p)
+	if warn != nil {
+		return nil, []optics.Warning{*warn}
 	}
-	for i := range p.Surfaces {
-		if len(p.Surfaces[i].Index) == 0 {
-			return nil, []optics.Warning{{Code: CodeBeamInvalid, Element: p.Surfaces[i].ID, Message: "the path has no index for this surface; the beam was not computed"}}
-		}
-	}
-	lam := p.WavelengthsNM[0]
-	g := newGaussian(lam, m2)
-	q0 := g.sourceQ(bm.WaistRadiusMM, bm.WaistAtMM)
-	t := trace(p, paraxial.Tangential, q0)
-	s := trace(p, paraxial.Sagittal, q0)
-	if at, angle, broke := breakdown(p, g, &t, &s); broke {
-		return nil, []optics.Warning{notParaxialWarning(p, at, angle)}
-	}
+	g, lam, m2 := t.g, p.WavelengthsNM[0], b.Source.GaussianBeam().BeamQuality()
 	st := stretches(p)
 
 	rep := &optics.BeamReport{WavelengthNM: lam, M2: m2, Elements: make([]optics.BeamAt, 0, len(p.Spans))}
@@ -108,11 +95,11 @@ func elementRow(p *optics.Path, g gaussian, t, s *planeTrace, sp optics.Span) (o
 	row := optics.BeamAt{
 		ID:           last.ID,
 		WTMM:         g.radiusMM(t.leave[sp.Last]),
-		WSMM:         g.radiusMM(s.leave[sp.Last]),
+		WSMM:         s.g.radiusMM(s.leave[sp.Last]),
 		RTMM:         curvatureMM(t.leave[sp.Last], nOut),
 		RSMM:         curvatureMM(s.leave[sp.Last], nOut),
 		ArrivingWTMM: g.radiusMM(t.arrive[sp.First]),
-		ArrivingWSMM: g.radiusMM(s.arrive[sp.First]),
+		ArrivingWSMM: s.g.radiusMM(s.arrive[sp.First]),
 		Transmitted:  1,
 	}
 	var faces []footprint
@@ -121,7 +108,7 @@ func elementRow(p *optics.Path, g gaussian, t, s *planeTrace, sp optics.Span) (o
 		if math.IsInf(sf.SemiAperture, 1) {
 			continue
 		}
-		f := footprint{aMM: sf.SemiAperture, wtMM: g.radiusMM(t.arrive[i]), wsMM: g.radiusMM(s.arrive[i])}
+		f := footprint{aMM: sf.SemiAperture, wtMM: g.radiusMM(t.arrive[i]), wsMM: s.g.radiusMM(s.arrive[i])}
 		// A tilted surface meets the beam obliquely: across the plane of incidence its footprint
 		// on the surface is longer by 1/cos i, while the clear aperture is a circle on it.
 		if paraxial.IncidencePlane(sf, paraxial.Tangential) {
@@ -147,4 +134,33 @@ func clipWarning(row optics.BeamAt, faces []footprint) optics.Warning {
 		Message: fmt.Sprintf("%s passes %.1f %% of the arriving beam through its %.3g mm clear diameter;%s Downstream the beam is computed as if it were not clipped.",
 			row.ID, 100*row.Transmitted, 2*faces[0].aMM, advice),
 	}
+}
+
+// sourceTraces follows the source's beam through p in both planes at the primary wavelength, or
+// gives the warning that says why it cannot.
+func sourceTraces(b *optics.Bench, p *optics.Path) (t, s planeTrace, warn *optics.Warning) {
+	bm := b.Source.GaussianBeam()
+	m2 := bm.BeamQuality()
+	_, vertical := bm.Planes()
+	m2s := vertical.Quality()
+	if len(p.WavelengthsNM) == 0 || !(p.WavelengthsNM[0] > 0) || !(bm.WaistRadiusMM > 0) || !(m2 > 0) ||
+		!(vertical.WaistRadiusMM > 0) || !(m2s > 0) || math.IsInf(vertical.WaistRadiusMM+m2s+vertical.WaistAtMM, 0) ||
+		math.IsInf(bm.WaistRadiusMM, 0) || math.IsInf(m2, 0) || math.IsNaN(bm.WaistAtMM) || math.IsInf(bm.WaistAtMM, 0) {
+		return planeTrace{}, planeTrace{}, &optics.Warning{Code: CodeBeamInvalid, Message: "source.beam needs a positive finite waist_radius_mm and m2, a finite waist_at_mm and a positive wavelength; the beam was not computed"}
+	}
+	for i := range p.Surfaces {
+		if len(p.Surfaces[i].Index) == 0 {
+			return planeTrace{}, planeTrace{}, &optics.Warning{Code: CodeBeamInvalid, Element: p.Surfaces[i].ID, Message: "the path has no index for this surface; the beam was not computed"}
+		}
+	}
+	lam := p.WavelengthsNM[0]
+	g := newGaussian(lam, m2)
+	gs := newGaussian(lam, m2s)
+	t = trace(p, paraxial.Tangential, g, g.sourceQ(bm.WaistRadiusMM, bm.WaistAtMM))
+	s = trace(p, paraxial.Sagittal, gs, gs.sourceQ(vertical.WaistRadiusMM, vertical.WaistAtMM))
+	if at, angle, broke := breakdown(p, g, &t, &s); broke {
+		w := notParaxialWarning(p, at, angle)
+		return planeTrace{}, planeTrace{}, &w
+	}
+	return t, s, nil
 }

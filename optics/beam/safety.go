@@ -31,7 +31,7 @@ func SafetyWarnings(b *optics.Bench, p *optics.Path) []optics.Warning {
 	switch b.Source.Kind {
 	case optics.SourceCollimated:
 		r0 = paraxial.Ray{Y: 1}
-	case optics.SourcePoint:
+	case optics.SourcePoint, optics.SourceFiber:
 		r0 = paraxial.Ray{NU: 1}
 	default:
 		return nil
@@ -190,7 +190,7 @@ func beamFocusWarnings(p *optics.Path, g gaussian, st []stretch, t, s *planeTrac
 			plane paraxial.Plane
 			tr    *planeTrace
 		}{{paraxial.Tangential, t}, {paraxial.Sagittal, s}} {
-			w, ok := waistIn(g, x, pl.tr.at(x.I))
+			w, ok := waistIn(pl.tr.g, x, pl.tr.at(x.I))
 			if !ok || sameZ(w.zMM, x.Z0) {
 				continue
 			}

@@ -44,7 +44,7 @@ func waists(p *optics.Path, g gaussian, st []stretch, t, s *planeTrace) []optics
 		if w, ok := waistIn(g, x, t.at(x.I)); ok {
 			ws = append(ws, w)
 		}
-		if w, ok := waistIn(g, x, s.at(x.I)); ok {
+		if w, ok := waistIn(s.g, x, s.at(x.I)); ok {
 			ss = append(ss, w)
 		}
 	}
@@ -154,7 +154,7 @@ func samples(p *optics.Path, g gaussian, st []stretch, t, s *planeTrace) []optic
 		x := st[k]
 		qt := advance(t.at(x.I), z-x.Z0, x.N)
 		qs := advance(s.at(x.I), z-x.Z0, x.N)
-		out = append(out, optics.BeamSample{PathMM: z, WTMM: g.radiusMM(qt), WSMM: g.radiusMM(qs)})
+		out = append(out, optics.BeamSample{PathMM: z, WTMM: g.radiusMM(qt), WSMM: s.g.radiusMM(qs)})
 	}
 	return out
 }

@@ -108,6 +108,9 @@ func fillAll(obj any, fields []optics.Field) {
 	for _, f := range fields {
 		switch p := f.In(obj).(type) {
 		case *string:
+			if *p == "" && len(f.Choices) > 0 {
+				*p = f.Choices[0]
+			}
 			if *p == "" && !f.Selects && !f.Required {
 				*p = "fused-silica"
 			}
@@ -300,6 +303,8 @@ func (c *changer) text(path string, f optics.Field, at place, x string) {
 		c.set(path, f, at, other([]string{optics.GridMetric25, optics.GridImperial1, optics.GridNone}, x))
 	case f.Key == "reflects":
 		c.set(path, f, at, other([]string{optics.ReflectsShorter, optics.ReflectsLonger}, x))
+	case len(f.Choices) > 0:
+		c.set(path, f, at, other(f.Choices, x))
 	case f.Key == "material":
 		c.set(path, f, at, other([]string{"water", "fused-silica"}, x))
 	default:

@@ -52,7 +52,7 @@ func Analyze(b *optics.Bench, p *optics.Path, k int, plane Plane) Result {
 	res.Values.Cardinal = Cardinals(p, k, plane, src)
 	res.Values.ApertureStop = StopSource
 
-	point := src.Kind == optics.SourcePoint
+	point := src.Diverging()
 	// The source's full axial ray: every candidate stop is measured against it.
 	axial := Ray{Y: 1}
 	if point {
@@ -61,8 +61,8 @@ func Analyze(b *optics.Bench, p *optics.Path, k int, plane Plane) Result {
 	if !point && src.SemiDiameterMM != nil {
 		axial.Y = *src.SemiDiameterMM
 	}
-	if point && src.NA != nil {
-		axial.NU = *src.NA
+	if point && src.ConeNA(p.WavelengthsNM[0]) > 0 {
+		axial.NU = src.ConeNA(p.WavelengthsNM[0])
 	}
 	axialTrace := Trace(p, k, plane, axial)
 	stop, ratio := limitingSurface(p, axialTrace, plane)
@@ -169,7 +169,7 @@ func IncidencePlane(s *optics.Surface, plane Plane) bool {
 // source, the object height in mm for a point source.
 func largestField(src *optics.Source) float64 {
 	var best float64
-	if src.Kind == optics.SourcePoint {
+	if src.Diverging() {
 		for _, h := range src.ObjectHeightsMM {
 			if math.Abs(h) > math.Abs(best) {
 				best = h

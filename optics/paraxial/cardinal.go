@@ -63,7 +63,7 @@ func Cardinals(p *optics.Path, k int, plane Plane, src *optics.Source) optics.Ca
 		if !out.Afocal {
 			out.ImageDistanceMM = ptr(*out.BFLMM)
 		}
-	case optics.SourcePoint:
+	case optics.SourcePoint, optics.SourceFiber:
 		// The source plane sits in air (index 1) at z = 0; planes before the first optical vertex
 		// do not bend rays, so the object space is one transfer.
 		zFirst := p.Surfaces[first].PathMM

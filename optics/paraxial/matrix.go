@@ -60,6 +60,9 @@ func Transfer(d, n float64) Matrix { return Matrix{A: 1, B: d / n, D: 1} }
 // The plane is the beam's; behind an odd number of 90° periscopes the mirror's table-plane power
 // falls in the beam's sagittal plane (see TablePlane).
 func Power(s *optics.Surface, nBefore, nAfter float64, plane Plane) float64 {
+	if !CylinderActs(s, plane) {
+		return 0
+	}
 	switch s.Kind {
 	case optics.Refracting:
 		return (nAfter - nBefore) * s.Curvature
@@ -122,4 +125,16 @@ func GapReducedMM(p *optics.Path, i, k int, plane Plane) float64 {
 		z0 = p.Surfaces[i-1].PathMM
 	}
 	return (s.PathMM - z0) / n
+}
+
+// CylinderActs reports whether surface s has power in the beam's plane: always for a sphere, for a
+// cylinder only in the table plane across its axis (a vertical axis bends the table plane).
+func CylinderActs(s *optics.Surface, plane Plane) bool {
+	switch s.CylinderAxis {
+	case optics.CylinderVertical:
+		return TablePlane(s, plane) == Tangential
+	case optics.CylinderHorizontal:
+		return TablePlane(s, plane) == Sagittal
+	}
+	return true
 }

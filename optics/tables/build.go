@@ -41,6 +41,9 @@ func Build(r *optics.Report) *Report {
 			t.add(outputSection(r.Beam.Output))
 		}
 	}
+	if len(r.Coupling) > 0 {
+		t.add(couplingSection(r.Coupling))
+	}
 	if len(r.Placement) > 0 {
 		t.add(placementSection(r.Placement))
 	}

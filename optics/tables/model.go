@@ -36,14 +36,15 @@ const (
 	Meetings     Name = "meetings"
 	BeamOutput   Name = "beam-output"
 	GlassWaists  Name = "glass-waists"
+	Coupling     Name = "coupling" // into fibres and mode targets
 )
 
 // arrangement is each layout's order of sections. A section that has nothing to show for a
 // bench (no beam, one wavelength) is not built and so not shown.
 var arrangement = map[Layout][]Name{
-	Text:    {System, Chromatic, Elements, Arms, ArmElements, Meetings, Spacing, Media, StoppedRays, Blur, Beam, Waists, Warnings},
-	Page:    {System, Chromatic, Elements, Arms, ArmElements, Meetings, Spacing, RayStatus, Blur, Beam, Waists, Placement, Media},
-	Compare: {System, Elements, Arms, ArmElements, Meetings, RayStatus, Blur, Spacing, Beam, Waists, Placement, WarningCount},
+	Text:    {System, Chromatic, Elements, Arms, ArmElements, Meetings, Spacing, Media, StoppedRays, Blur, Beam, Waists, Coupling, Warnings},
+	Page:    {System, Chromatic, Elements, Arms, ArmElements, Meetings, Spacing, RayStatus, Blur, Beam, Waists, Coupling, Placement, Media},
+	Compare: {System, Elements, Arms, ArmElements, Meetings, RayStatus, Blur, Spacing, Beam, Waists, Coupling, Placement, WarningCount},
 }
 
 // beamLead and beamDesign are the text report's and the page's order for a bench with a Gaussian
@@ -51,8 +52,8 @@ var arrangement = map[Layout][]Name{
 // warnings; the lens-design values after them. A layout missing here keeps its arrangement.
 var (
 	beamLead = map[Layout][]Name{
-		Text: {Beam, Waists, GlassWaists, BeamOutput, Elements, Arms, ArmElements, Meetings, Warnings},
-		Page: {Beam, Waists, GlassWaists, BeamOutput, Placement, Arms, ArmElements, Meetings},
+		Text: {Beam, Waists, GlassWaists, BeamOutput, Coupling, Elements, Arms, ArmElements, Meetings, Warnings},
+		Page: {Beam, Waists, GlassWaists, BeamOutput, Coupling, Placement, Arms, ArmElements, Meetings},
 	}
 	beamDesign = map[Layout][]Name{
 		Text: {System, Chromatic, Spacing, Media, StoppedRays, Blur},

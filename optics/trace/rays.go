@@ -37,7 +37,7 @@ func Rays(b *optics.Bench, p *optics.Path) []RaySpec {
 		n = 0
 	}
 	var fields []float64
-	fieldUnit, point := "deg", src.Kind == optics.SourcePoint
+	fieldUnit, point := "deg", src.Diverging()
 	if point {
 		fields, fieldUnit = src.ObjectHeightsMM, "mm"
 	} else {
@@ -65,8 +65,8 @@ func Rays(b *optics.Bench, p *optics.Path) []RaySpec {
 	if src.SemiDiameterMM != nil {
 		semi = *src.SemiDiameterMM
 	}
-	if src.NA != nil {
-		na = *src.NA
+	if len(p.WavelengthsNM) > 0 {
+		na = src.ConeNA(p.WavelengthsNM[0])
 	}
 	digits := len(strconv.Itoa(max(n-1, 0)))
 	for _, f := range fields {

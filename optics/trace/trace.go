@@ -101,7 +101,8 @@ func Trace(p *optics.Path, k int, s Start, buf []Point) Result {
 				continue
 			}
 			axis := r3.Vec{X: 0, Y: 0, Z: 1}
-			hit, miss := intersect(p0, dir, axis, sf.Curvature)
+			across := acrossCylinder(sf.CylinderAxis)
+			hit, miss := intersectCylinder(p0, dir, sf.Curvature, across)
 			if miss != hitOK {
 				return stop(optics.RayMissed, missReason(sf, miss))
 			}
@@ -109,7 +110,7 @@ func Trace(p *optics.Path, k int, s Start, buf []Point) Result {
 				pts = append(pts, Point{Surface: i, Pos: hit, Dir: dir})
 				return stop(optics.RayClipped, clipReason(sf, r))
 			}
-			d, ok := refract(dir, normal(hit, axis, sf.Curvature), p.IndexBefore(i, k), sf.Index[k])
+			d, ok := refract(dir, normal(r3.Vec{X: hit.X * across.X, Y: hit.Y * across.Y, Z: hit.Z}, axis, sf.Curvature), p.IndexBefore(i, k), sf.Index[k])
 			if !ok {
 				pts = append(pts, Point{Surface: i, Pos: hit, Dir: dir})
 				return stop(optics.RayTIR, "total internal reflection at "+where(sf))
@@ -135,7 +136,9 @@ func Trace(p *optics.Path, k int, s Start, buf []Point) Result {
 			}
 			if sf.Kind == optics.Thin && sf.FocalMM != 0 && !math.IsInf(sf.FocalMM, 0) {
 				// An ideal thin lens changes the slopes dx/dz and dy/dz by -x/f and -y/f.
-				dir = unit(r3.Vec{X: dir.X/dir.Z - hit.X/sf.FocalMM, Y: dir.Y/dir.Z - hit.Y/sf.FocalMM, Z: 1})
+				// A cylinder changes only the slope across its axis.
+				across := acrossCylinder(sf.CylinderAxis)
+				dir = unit(r3.Vec{X: dir.X/dir.Z - across.X*hit.X/sf.FocalMM, Y: dir.Y/dir.Z - across.Y*hit.Y/sf.FocalMM, Z: 1})
 			}
 			pts = append(pts, Point{Surface: i, Pos: hit, Dir: dir})
 			if sf.Stops {

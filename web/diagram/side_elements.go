@@ -79,6 +79,17 @@ var sideDrawings = map[string]func(p *pen, f *sideFrame, e *optics.ElementPlace,
 		hv := visibleHalf(f, h)
 		p.rect(f.x(z), f.y(hv), 10, 2*hv*f.pxPerMMY(), `fill="#262626"`)
 	},
+	// A fibre is its connector: a block behind the face with the core drawn across its middle.
+	optics.TypeFiber: func(p *pen, f *sideFrame, e *optics.ElementPlace, z, h float64) {
+		hv := visibleHalf(f, h)
+		p.rect(f.x(z), f.y(hv), 12, 2*hv*f.pxPerMMY(), `fill="#c8a24a"`, `stroke="#5d4a1f"`, `stroke-width="1"`)
+		p.line(f.x(z), f.y(0), f.x(z)+12, f.y(0), `stroke="#5d4a1f"`, `stroke-width="1"`)
+	},
+	// A mode target is the plane of the mode it stands for, dashed.
+	optics.TypeModeTarget: func(p *pen, f *sideFrame, e *optics.ElementPlace, z, h float64) {
+		hv := visibleHalf(f, h)
+		p.line(f.x(z), f.y(hv), f.x(z), f.y(-hv), `stroke="#7b4fa0"`, `stroke-width="2"`, `stroke-dasharray="3 3"`)
+	},
 	// A splitter is drawn as a thin half-silvered plate: a light filled bar with a dashed face.
 	optics.TypeSplitter: func(p *pen, f *sideFrame, e *optics.ElementPlace, z, h float64) {
 		hv := visibleHalf(f, h)

@@ -82,6 +82,13 @@ func (t *tableScene) drawElement(p *pen, e *optics.ElementPlace, be *optics.Boar
 		side, depth := r2.Scale(s, ac), r2.Scale(s, in)
 		xs, ys := t.poly([]r2.Vec{r2.Add(r2.Sub(pos, depth), side), r2.Add(r2.Add(pos, depth), side), r2.Sub(r2.Add(pos, depth), side), r2.Sub(r2.Sub(pos, depth), side)})
 		p.polygon(xs, ys, `fill="#b0bec5"`, `stroke="#37474f"`, w(2))
+	case optics.TypeFiber: // a connector block behind the face the beam enters
+		s := math.Max(4, 0.6*t.st.minHalf/t.st.s)
+		side, depth := r2.Scale(s, ac), r2.Scale(3*s, in)
+		xs, ys := t.poly([]r2.Vec{r2.Add(pos, side), r2.Add(r2.Add(pos, side), depth), r2.Add(r2.Sub(pos, side), depth), r2.Sub(pos, side)})
+		p.polygon(xs, ys, `fill="#c8a24a"`, `stroke="#5d4a1f"`, w(1.5))
+	case optics.TypeModeTarget: // the mode's plane, dashed: a place to match, not a part
+		stroke(pos, h, `stroke="#7b4fa0"`, w(2.5), attr("stroke-dasharray", p.num(1.5*t.st.line)+" "+p.num(1.5*t.st.line)))
 	default:
 		stroke(pos, h, `stroke="#888888"`, w(1))
 	}
