@@ -25,6 +25,8 @@ const (
 	WarnOpenPort            WarningCode = "open-port"
 	WarnMissesPart          WarningCode = "misses-part"
 	WarnImageRotated        WarningCode = "image-rotated"
+	// Glass-code accuracy (README 'Media').
+	WarnGlassCodePoor WarningCode = "glass-code-poor"
 )
 
 // WarningCodes is every code with what it means, in the order the README lists them.
@@ -51,6 +53,7 @@ var WarningCodes = []struct {
 	{WarnOpenPort, "a splitter's port sends light that no element takes and that joins no other beam: a stray beam; the message gives its share of the source's power"},
 	{WarnMissesPart, "a same_as pass arrives more than 0.5 mm from its part, on the table or in height; `others` names the part"},
 	{WarnImageRotated, "a periscope turns the beam by an angle that is not a multiple of 90°: the image is rotated, the exact trace is right, the paraxial and beam values downstream are in the rotated planes"},
+	{WarnGlassCodePoor, "a medium given by nd and vd (a glass code) is used where the two-term model errs by more than 1e-3 in index (measured: flints below 470 nm, dense flints above 740 nm, every glass above 870 nm); give a Sellmeier fit"},
 }
 
 // Meaning says what the code means; "" for a code that is not in WarningCodes.
