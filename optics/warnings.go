@@ -46,7 +46,7 @@ var WarningCodes = []struct {
 	{WarnFocusNearGlass, "the source's ray bundle comes to a focus within 1 mm of a glass surface"},
 	{WarnBeamNotParaxial, "the beam diverges beyond 1 rad, where the Gaussian beam no longer holds; no beam numbers past the element"},
 	{WarnMountsOverlap, "two mount footprints overlap; `others` names the second"},
-	{WarnMountInBeam, "the beam (its 1/e² envelope, else the traced rays) crosses another element's mount"},
+	{WarnMountInBeam, "the beam (the radius passing 99 % of its power, 1.52 times its 1/e² radius; else the traced rays) crosses another element's mount"},
 	{WarnOffTable, "an element or its mount lies off the table"},
 	{WarnBeamOffTable, "a stretch of the beam leaves the table"},
 	{WarnNoBeamEnd, "the path does not end on a screen or dump"},

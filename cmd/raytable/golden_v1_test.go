@@ -57,6 +57,8 @@ var v1Changes = []struct {
 }{
 	{regexp.MustCompile(`^\.elements\[(\d+)\]\.(max_exact_r_mm|clearance): `), []string{"mirror", "splitter", "periscope"},
 		"a tilted surface's clearance is measured on the surface, as its clear aperture is (README 'Report, format raytable/report/v1', Rays)"},
+	{regexp.MustCompile(`^\.placement\[(\d+)\]\.(table_x_mm|table_y_mm|hole_column|hole_row|offset_x_mm|offset_y_mm): `), []string{"mirror"},
+		"a mirror's post stands behind its reflecting surface, the optic at the front of the mount (README 'The breadboard')"},
 }
 
 // v1Exception says why problem p (a line of missingFrom) is an intended change, or "" when it is not.
