@@ -109,7 +109,7 @@ type ElementPlace struct {
 	Faces          []FacePlace `json:"faces"`
 	MarginalYMM    float64     `json:"marginal_y_mm"`  // paraxial marginal ray height at the first face (tangential)
 	ChiefYMM       float64     `json:"chief_y_mm"`     // paraxial chief ray height at the first face (tangential)
-	MaxExactYMM    float64     `json:"max_exact_r_mm"` // largest radial distance of an exact ray from the axis at any face
+	MaxExactYMM    float64     `json:"max_exact_r_mm"` // largest distance of an exact ray from the centre of any face, on the face (a tilted mirror's too)
 	Clearance      *float64    `json:"clearance"`      // max_exact_r_mm / semi_diameter_mm; > 1 means rays are cut
 }
 

@@ -47,7 +47,46 @@ func (v *checker) elements() {
 		}
 	}
 	if len(v.problems) == 0 {
+		v.glassOverlaps(lists)
 		v.passGeometry()
+	}
+}
+
+// glassOverlaps checks, in each element list, that two consecutive lenses leave air between
+// them everywhere inside their common clear aperture. At height h the air gap along the beam is
+// gap − s_last(h) + s_first(h), with s the sag of the first lens's last face and the second's
+// first face (positive downstream, README 'Bench file': a radius is positive when its centre lies
+// downstream). A face with no clear aperture exists out to its radius. The air gap is monotonic
+// in h (as the edge thickness in edge) and equals the gap, which is not negative, on the axis, so
+// the rim of the common aperture decides. Glass that overlaps would make the exact trace meet the
+// second face before the first and run backwards. Faces touching (air 0) are allowed, as lenses
+// set in contact are. Passes (same_as) carry no faces of their own and are not checked here.
+func (v *checker) glassOverlaps(lists []elementList) {
+	for _, l := range lists {
+		els := *l.Els
+		for i := 1; i < len(els); i++ {
+			a, b := &els[i-1], &els[i]
+			if a.Type != TypeLens || b.Type != TypeLens || a.SameAs != "" || b.SameAs != "" ||
+				len(a.FacesMM) == 0 || len(b.FacesMM) == 0 {
+				continue
+			}
+			last, first := a.FacesMM[len(a.FacesMM)-1], b.FacesMM[0]
+			h := min(a.SemiDiameterMM(), b.SemiDiameterMM())
+			for _, r := range []*float64{last, first} {
+				if r != nil {
+					h = min(h, math.Abs(*r))
+				}
+			}
+			if math.IsInf(h, 1) {
+				continue // two flat faces with no aperture: the air is the gap everywhere
+			}
+			need := sag(last, h) - sag(first, h)
+			if air := b.GapMM - need; air < 0 {
+				v.add(field(index(l.Path, i), "gap_mm"),
+					"the glass of %s and %s overlaps: at %s mm from the axis, the rim of their common clear aperture, the air between %s's last face and %s's first face is %s mm; it may not be negative, so the gap must be at least %s mm",
+					a.ID, b.ID, fmtNum(h), a.ID, b.ID, fmtRound(air), fmtRound(math.Ceil(need*1000)/1000)) // rounded up to 1 µm
+			}
+		}
 	}
 }
 

@@ -26,6 +26,8 @@ const (
 	WarnMissesPart          WarningCode = "misses-part"
 	WarnImageRotated        WarningCode = "image-rotated"
 	WarnFocusMissesScreen   WarningCode = "focus-misses-screen"
+	// Glass-code accuracy (README 'Media').
+	WarnGlassCodePoor WarningCode = "glass-code-poor"
 )
 
 // WarningCodes is every code with what it means, in the order the README lists them.
@@ -45,7 +47,7 @@ var WarningCodes = []struct {
 	{WarnFocusNearGlass, "the source's ray bundle comes to a focus within 1 mm of a glass surface"},
 	{WarnBeamNotParaxial, "the beam diverges beyond 1 rad, where the Gaussian beam no longer holds; no beam numbers past the element"},
 	{WarnMountsOverlap, "two mount footprints overlap; `others` names the second"},
-	{WarnMountInBeam, "the beam (its 1/e² envelope, else the traced rays) crosses another element's mount"},
+	{WarnMountInBeam, "the beam (the radius passing 99 % of its power, 1.52 times its 1/e² radius; else the traced rays) crosses another element's mount"},
 	{WarnOffTable, "an element or its mount lies off the table"},
 	{WarnBeamOffTable, "a stretch of the beam leaves the table"},
 	{WarnNoBeamEnd, "the path does not end on a screen or dump"},
@@ -53,6 +55,7 @@ var WarningCodes = []struct {
 	{WarnMissesPart, "a same_as pass arrives more than 0.5 mm from its part, on the table or in height; `others` names the part"},
 	{WarnImageRotated, "a periscope turns the beam by an angle that is not a multiple of 90°: the image is rotated, the exact trace is right, the paraxial and beam values downstream are in the rotated planes"},
 	{WarnFocusMissesScreen, "the beam's waist lies farther from a screen than its Rayleigh range, in front of it (after the element before it) or behind it; the message says how far"},
+	{WarnGlassCodePoor, "a medium given by nd and vd (a glass code) is used where the two-term model errs by more than 1e-3 in index (measured: flints below 470 nm, dense flints above 740 nm, every glass above 870 nm); give a Sellmeier fit"},
 }
 
 // Meaning says what the code means; "" for a code that is not in WarningCodes.

@@ -5,18 +5,21 @@ import (
 	"sort"
 
 	"raytable/optics"
+	"raytable/optics/beam"
 )
 
 // beamRadius returns the half-width of the light along the path, for the mount-in-beam and
-// off-table checks: the larger of the two 1/e² radii of the Gaussian beam when the bench has one,
-// else the largest exact ray height at each element (the source's bundle at the start),
-// interpolated linearly in between.
+// off-table checks: when the bench has a Gaussian beam, the radius that passes 99 % of its power
+// (beam.PassRadiusPerW of the clip rule, about 1.52 times the larger of the two 1/e² radii); else
+// the largest exact ray distance at each element (the source's bundle at the start), interpolated
+// linearly in between. On a tilted mirror that distance is measured on the mirror, up to 1/cos i
+// wider than the bundle across the beam: on the safe side.
 func beamRadius(r *optics.Report, b *optics.Bench) func(pathMM float64) float64 {
 	var zs, ws []float64
 	if r.Beam != nil && len(r.Beam.Samples) > 0 {
 		for _, s := range r.Beam.Samples {
 			zs = append(zs, s.PathMM)
-			ws = append(ws, math.Max(s.WTMM, s.WSMM))
+			ws = append(ws, beam.PassRadiusPerW*math.Max(s.WTMM, s.WSMM))
 		}
 	} else {
 		zs = append(zs, 0)

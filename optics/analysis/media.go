@@ -8,7 +8,8 @@ import (
 )
 
 // media lists the index of every medium the bench uses at every wavelength, and warns where a
-// wavelength lies outside the range the medium's model was fitted over.
+// wavelength lies outside the range the medium's model was fitted over or where a glass code's
+// model is poor (material.GlassCode.Poor).
 func media(b *optics.Bench, warnings []optics.Warning) ([]optics.MediumIndex, []optics.Warning) {
 	out := []optics.MediumIndex{}
 	for _, name := range optics.MaterialNames(b) {
@@ -27,6 +28,13 @@ func media(b *optics.Bench, warnings []optics.Warning) ([]optics.MediumIndex, []
 					Code:    optics.WarnOutsideFitRange,
 					Element: usedBy(b, name),
 					Message: fmt.Sprintf("%s at %g nm is outside the %g-%g nm range of its index model; the index is extrapolated", name, w, lo, hi),
+				})
+			}
+			if g, ok := m.(material.GlassCode); ok && g.Poor(w) != "" {
+				warnings = append(warnings, optics.Warning{
+					Code:    optics.WarnGlassCodePoor,
+					Element: usedBy(b, name),
+					Message: fmt.Sprintf("%s at %g nm: %s", name, w, g.Poor(w)),
 				})
 			}
 		}

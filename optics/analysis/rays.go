@@ -2,7 +2,6 @@ package analysis
 
 import (
 	"fmt"
-	"math"
 
 	"gonum.org/v1/gonum/spatial/r3"
 
@@ -48,8 +47,10 @@ func traceRays(b *optics.Bench, p *optics.Path, places []optics.ElementPlace) ([
 				Paraxial: optics.ParaxialPoint{YMM: twin[pt.Surface].Y, URad: twin[pt.Surface].NU / s.Index[spec.K]},
 				Exact:    optics.ExactPoint{XMM: pt.Pos.X, YMM: pt.Pos.Y, ZMM: pt.Pos.Z, Dir: vec(pt.Dir)},
 			})
-			if r := math.Hypot(pt.Pos.X, pt.Pos.Y); r > places[s.Element].MaxExactYMM {
-				places[s.Element].MaxExactYMM = r
+			// Measured where the clear aperture is, on the surface: across the leaving beam a
+			// tilted mirror's hit would look cos i too close to the centre.
+			if pt.RimMM > places[s.Element].MaxExactYMM {
+				places[s.Element].MaxExactYMM = pt.RimMM
 			}
 		}
 		if res.Surface >= 0 {

@@ -8,6 +8,11 @@ import (
 // practice: an aperture should pass 99 % of a Gaussian beam).
 const PassFraction = 0.99
 
+// PassRadiusPerW is the radius of the centred circle that passes PassFraction of a round Gaussian
+// beam, in units of its 1/e² radius w: 1 − exp(−2a²/w²) = 0.99 gives a = w·√(ln 100 / 2) ≈ 1.52 w.
+// The clip rule and the mount-in-beam check both take the beam to be this wide.
+var PassRadiusPerW = math.Sqrt(-math.Log(1-PassFraction) / 2)
+
 // FractionInCircle is the fraction of the power of a centred Gaussian beam with 1/e² radii wxMM and
 // wyMM (along two perpendicular axes) that a circle of radius aMM passes. A round beam gives
 // 1 - exp(-2a²/w²); otherwise the integral

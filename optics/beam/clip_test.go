@@ -135,3 +135,14 @@ func TestTransmittedAndWarning(t *testing.T) {
 		t.Errorf("tilted mirror transmitted %v, want %v (less than at normal incidence)", got, wantM)
 	}
 }
+
+// TestPassRadiusPerW: the circle of radius PassRadiusPerW·w passes exactly PassFraction of a round
+// beam (the Gaussian's encircled power 1 − exp(−2a²/w²)), and is the 1.52 w of common practice.
+func TestPassRadiusPerW(t *testing.T) {
+	if got := FractionInCircle(PassRadiusPerW*2, 2, 2); !approx.Abs(got, PassFraction, 1e-12) {
+		t.Errorf("a circle of %.6f w passes %.12f, want %g", PassRadiusPerW, got, PassFraction)
+	}
+	if !approx.Abs(PassRadiusPerW, 1.517427, 1e-6) { // √(ln 100 / 2), by hand
+		t.Errorf("PassRadiusPerW = %.7f, want 1.517427", PassRadiusPerW)
+	}
+}

@@ -33,9 +33,10 @@ type Footprint struct {
 
 // Footprints returns each element's mount footprint, in bench order. The rectangle is centred on
 // the element: on the middle of a thick lens between its first and last vertex, on the vertex of
-// every other element. Its depth axis is the beam's heading, except for a mirror, whose mount is
-// aligned with its surface: depth along the mirror's normal (pointing to the reflecting side), width
-// along the surface. places must come from Walk for the same bench; extra entries on either side
+// every other element except a mirror. Its depth axis is the beam's heading, except for a mirror,
+// whose mount is aligned with its surface: depth along the mirror's normal (pointing to the
+// reflecting side), width along the surface, and the whole rectangle behind the surface (README
+// 'The breadboard'). places must come from Walk for the same bench; extra entries on either side
 // are ignored.
 func Footprints(b *optics.Bench, places []optics.ElementPlace) []Footprint {
 	if b == nil {
@@ -51,7 +52,10 @@ func Footprints(b *optics.Bench, places []optics.ElementPlace) []Footprint {
 		axis := p.HeadingInDeg
 		switch {
 		case e.Type == optics.TypeMirror:
+			// The optic sits at the front of its mount and the post behind it, on the side away
+			// from the beam: the footprint's front edge lies on the reflecting surface.
 			axis = mirrorNormalDeg(p.HeadingInDeg, p.HeadingOutDeg)
+			center = along(first, axis, -m.DepthMM/2)
 		case e.Type == optics.TypeSplitter:
 			// Midway along the plate, the mount square to the splitter's surface (a mirror's
 			// normal for its reflected port).

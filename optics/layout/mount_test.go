@@ -1,6 +1,7 @@
 package layout
 
 import (
+	"fmt"
 	"math"
 	"testing"
 
@@ -25,15 +26,17 @@ func TestFootprints(t *testing.T) {
 		{"thick lens", bench(100, 100, 90, optics.Element{ID: "L1", Type: optics.TypeLens, GapMM: 50,
 			FacesMM: []*float64{f(40), f(-40)}, ThicknessesMM: []float64{20}, Materials: []string{"fused-silica"}, DiameterMM: f(25.4)}),
 			0, 100, 160, 40.4, 26, 90, 120.2, 173},
-		// A 90° fold mirror's mount is aligned with the mirror: its normal bisects the turn, heading 135°,
-		// so the square's corner 0 sits on the +y diagonal (rotation identity: cos 45° = sin 45° = √2/2).
-		{"fold mirror", bench(100, 100, 0, mirror("M1", 100, 90)), 0, 200, 100, 40.4, 40.4, 135,
-			200, 100 + 20.2*math.Sqrt2},
-		// A -90° fold: the normal points back and down, 225°, and corner 0 sits on the -x diagonal.
-		{"fold mirror clockwise", bench(100, 300, 0, mirror("M1", 100, -90)), 0, 200, 300, 40.4, 40.4, 225,
-			200 - 20.2*math.Sqrt2, 300},
-		// A retro mirror (180°) faces straight back at the beam.
-		{"retro mirror", bench(100, 100, 0, mirror("M1", 100, 180)), 0, 200, 100, 40.4, 40.4, 180, 179.8, 120.2},
+		// A 90° fold mirror's mount is aligned with the mirror: its normal bisects the turn, heading
+		// 135°. The post stands half the depth behind the surface, (200, 100) − 20.2·(−√2/2, √2/2),
+		// and corner 0 lies on the surface, 20.2 mm from the vertex along it (rotation identity:
+		// cos 45° = sin 45° = √2/2).
+		{"fold mirror", bench(100, 100, 0, mirror("M1", 100, 90)), 0, 200 + 20.2/math.Sqrt2, 100 - 20.2/math.Sqrt2,
+			40.4, 40.4, 135, 200 + 20.2/math.Sqrt2, 100 + 20.2/math.Sqrt2},
+		// A -90° fold: the normal points back and down, 225°, the post behind it up and to the right.
+		{"fold mirror clockwise", bench(100, 300, 0, mirror("M1", 100, -90)), 0, 200 + 20.2/math.Sqrt2, 300 + 20.2/math.Sqrt2,
+			40.4, 40.4, 225, 200 - 20.2/math.Sqrt2, 300 + 20.2/math.Sqrt2},
+		// A retro mirror (180°) faces straight back at the beam; its post stands 20.2 mm beyond it.
+		{"retro mirror", bench(100, 100, 0, mirror("M1", 100, 180)), 0, 220.2, 100, 40.4, 40.4, 180, 200, 120.2},
 		// A mount given in the bench file wins over the default.
 		{"mount override", bench(100, 100, 0, func() optics.Element {
 			e := thin("L1", 50)
@@ -91,5 +94,34 @@ func TestConvexOverlap(t *testing.T) {
 		if got := convexOverlap(c.b, c.a); got != c.want {
 			t.Errorf("%s (swapped): overlap %v, want %v", c.name, got, c.want)
 		}
+	}
+}
+
+// TestMirrorMountBehindSurface: for any turn a mirror's footprint lies wholly behind its reflecting
+// surface, the optic at the front edge and the post away from the beam (README 'The breadboard'):
+// two corners on the surface line, two a full depth behind it, measured along the normal.
+func TestMirrorMountBehindSurface(t *testing.T) {
+	for _, turn := range []float64{20, 60, 90, 135, 180, -45, -170} {
+		t.Run(fmt.Sprint(turn), func(t *testing.T) {
+			b := bench(100, 100, 0, mirror("M1", 100, turn))
+			places := Walk(b)
+			fp := Footprints(b, places)[0]
+			vertex := r2.Vec{X: places[0].TableXMM, Y: places[0].TableYMM}
+			n := unitDeg(mirrorNormalDeg(places[0].HeadingInDeg, places[0].HeadingOutDeg))
+			var front, back int
+			for _, c := range fp.Corners {
+				switch d := r2.Dot(r2.Sub(c, vertex), n); {
+				case near(d, 0, posTolMM):
+					front++
+				case near(d, -fp.DepthMM, posTolMM):
+					back++
+				default:
+					t.Errorf("corner %v lies %g mm from the surface along its normal", c, d)
+				}
+			}
+			if front != 2 || back != 2 {
+				t.Errorf("%d corners on the surface and %d a depth behind, want 2 and 2", front, back)
+			}
+		})
 	}
 }

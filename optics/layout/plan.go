@@ -22,8 +22,9 @@ const (
 // from it) and the warnings, each naming the elements involved: the Element field holds the one to
 // move (the upstream one of an overlapping pair), the message names all of them.
 //
-// beamRadius gives the beam's half-width at a distance along the unfolded path from the source (the
-// 1/e² radius of a Gaussian beam, or the ray bundle's envelope); nil means a beam of no width. The
+// beamRadius gives the beam's half-width at a distance along the unfolded path from the source (for
+// a Gaussian beam the radius that passes 99 % of its power, beam.PassRadiusPerW times its 1/e²
+// radius, as the analysis passes it; or the ray bundle's envelope); nil means a beam of no width. The
 // beam is checked as a band of that half-width around each straight segment of the folded path
 // (see band). A mount counts as in the beam only for segments that neither end nor start at its own
 // element. Table-edge checks are skipped when the table has no positive width and depth.

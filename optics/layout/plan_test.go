@@ -1,6 +1,7 @@
 package layout
 
 import (
+	"math"
 	"os"
 	"strings"
 	"testing"
@@ -20,9 +21,12 @@ func TestPlanPlacement(t *testing.T) {
 		// (115, 60) on the common-practice metric grid: nearest hole column 5 (112.5), row 3 (62.5).
 		{ID: "L1", Type: optics.TypeThinLens, TableXMM: 115, TableYMM: 60, HeadingDeg: 0, HoleColumn: 5, HoleRow: 3,
 			OffsetXMM: 2.5, OffsetYMM: -2.5, MountWidthMM: 40.4, MountDepthMM: 18},
-		// (415, 60): column 17 (412.5), row 3; the mirror's mount faces along its normal, 135°.
-		{ID: "M1", Type: optics.TypeMirror, TableXMM: 415, TableYMM: 60, HeadingDeg: 135, HoleColumn: 17, HoleRow: 3,
-			OffsetXMM: 2.5, OffsetYMM: -2.5, MountWidthMM: 40.4, MountDepthMM: 40.4},
+		// The mirror's vertex is at (415, 60) and its mount faces along its normal, 135°, with the
+		// post half the 40.4 mm depth behind the surface: (415 + 20.2/√2, 60 − 20.2/√2) =
+		// (429.28, 45.72), nearest column 18 (437.5), row 2 (37.5).
+		{ID: "M1", Type: optics.TypeMirror, TableXMM: 415 + 20.2/math.Sqrt2, TableYMM: 60 - 20.2/math.Sqrt2, HeadingDeg: 135,
+			HoleColumn: 18, HoleRow: 2, OffsetXMM: 415 + 20.2/math.Sqrt2 - 437.5, OffsetYMM: 60 - 20.2/math.Sqrt2 - 37.5,
+			MountWidthMM: 40.4, MountDepthMM: 40.4},
 		// (415, 160): row 7 (162.5).
 		{ID: "D", Type: optics.TypeDump, TableXMM: 415, TableYMM: 160, HeadingDeg: 90, HoleColumn: 17, HoleRow: 7,
 			OffsetXMM: 2.5, OffsetYMM: -2.5, MountWidthMM: 30, MountDepthMM: 30},

@@ -58,18 +58,16 @@ var builtins = map[string]Medium{
 
 	// M. Daimon and A. Masumura, "Measurement of the refractive index of distilled water from the
 	// near-infrared region to the ultraviolet region", Appl. Opt. 46, 3811 (2007), four-term
-	// Sellmeier at 20 °C, 182-1129 nm. Coefficients from memory, checked against water's
-	// n_D ≈ 1.333 at 20 °C (see water_test.go): the fit gives 1.33335 at 589.3 nm, which is the
-	// air-relative handbook value 1.33299 times n_air ≈ 1.00027, so the fit appears to give the
-	// index relative to vacuum. It is used as published; the 3.6e-4 offset is far below what a
-	// bench layout resolves.
-	Water: Sellmeier{
+	// Sellmeier at 20 °C, 182-1129 nm. Coefficients from memory. The fit gives 1.33335 at 589.3 nm,
+	// the air-relative handbook value 1.33299 times n_air ≈ 1.00028: it is relative to vacuum, so
+	// OverAir divides it by the index of standard air (water_test.go checks both).
+	Water: OverAir{Vacuum: Sellmeier{
 		B:      []float64{5.684027565e-1, 1.726177391e-1, 2.086189578e-2, 1.130748688e-1},
 		CUM2:   []float64{5.101829712e-3, 1.821153936e-2, 2.620722293e-2, 1.069792721e1},
 		LoNM:   182,
 		HiNM:   1129,
 		Source: "Daimon and Masumura 2007 (Appl. Opt. 46, 3811), 20 °C",
-	},
+	}},
 }
 
 // Builtin returns a built-in medium by its exact name, or the glass of a "code:NNNMMM" name.
@@ -96,12 +94,20 @@ func Lookup(name string) (Medium, error) {
 			name, strings.Join(BuiltinNames(), ", "))
 		return nil, InputError{{Rule: rule}}
 	}
-	if s, ok := m.(Sellmeier); ok {
-		s.B = slices.Clone(s.B)
-		s.CUM2 = slices.Clone(s.CUM2)
-		return s, nil
+	switch s := m.(type) {
+	case Sellmeier:
+		return s.clone(), nil
+	case OverAir:
+		return OverAir{Vacuum: s.Vacuum.clone()}, nil
 	}
 	return m, nil
+}
+
+// clone is s with its own coefficient slices.
+func (s Sellmeier) clone() Sellmeier {
+	s.B = slices.Clone(s.B)
+	s.CUM2 = slices.Clone(s.CUM2)
+	return s
 }
 
 // BuiltinNames returns the built-in media names, sorted, for help text and forms. Glass codes are

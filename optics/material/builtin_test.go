@@ -72,7 +72,7 @@ func TestBuiltinDescribeNamesSource(t *testing.T) {
 		{FusedSilica, "Sellmeier, Malitson 1965 (JOSA 55, 1205), valid 210-3710 nm"},
 		{CalciumFluoride, "Sellmeier, Malitson 1963 (Appl. Opt. 2, 1103), valid 230-9700 nm"},
 		{SapphireO, "Sellmeier, Malitson and Dodge 1972 (JOSA 62, 1405), ordinary ray, valid 200-5500 nm"},
-		{Water, "Sellmeier, Daimon and Masumura 2007 (Appl. Opt. 46, 3811), 20 °C, valid 182-1129 nm"},
+		{Water, "Sellmeier, Daimon and Masumura 2007 (Appl. Opt. 46, 3811), 20 °C, valid 182-1129 nm, over standard air (Ciddor 1996)"},
 	}
 	for _, tc := range tests {
 		m, _ := Builtin(tc.name)

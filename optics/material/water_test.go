@@ -6,53 +6,39 @@ import (
 	"raytable/optics/internal/approx"
 )
 
-// The water fit was recalled from memory, so it is checked against the best-known value of all:
-// n_D = 1.33299 for water at 20 °C and the sodium D line, 589.29 nm, relative to air (CRC Handbook
-// of Chemistry and Physics, from memory), usually quoted as 1.333.
-func TestWaterSodiumD(t *testing.T) {
+// Water is air-relative like every other medium (README 'Media'): its fit, relative to vacuum, is
+// divided by the index of standard air. Checked against the best-known values of all: water at
+// 20 °C relative to air, n_D = 1.33299 at the sodium D line (589.29 nm), nF = 1.33712, nC = 1.33115
+// and vd ≈ 55.7 (CRC Handbook of Chemistry and Physics, from memory), usually quoted as 1.333.
+func TestWaterIsAirRelative(t *testing.T) {
 	const (
-		sodiumDNM       = 589.29
-		waterNDAir      = 1.33299 // CRC Handbook, 20 °C, relative to air (from memory)
-		nAirSodiumD     = 1.00027 // standard air at the D line, Edlén 1966 (from memory)
-		tolVacuumOffset = 5e-5    // n_air is known here to ±1e-5; rounding of the quoted values
-	)
-	water, _ := Builtin(Water)
-	n := water.Index(sodiumDNM)
-	// The well-known n_D ≈ 1.333, to the 1e-3 it is usually quoted with (common practice).
-	const tolUsual = 1e-3
-	if !approx.Abs(n, 1.333, tolUsual) {
-		t.Errorf("water n_D = %.5f, want 1.333 ± 1e-3", n)
-	}
-	// Sharper: the fit is the air-relative handbook value times n_air, i.e. it is relative to vacuum
-	// as builtin.go documents. A slip in any coefficient digit that matters would break this.
-	if got := n / nAirSodiumD; !approx.Abs(got, waterNDAir, tolVacuumOffset) {
-		t.Errorf("water n_D / n_air = %.6f, want %.5f ± %g", got, waterNDAir, tolVacuumOffset)
-	}
-}
-
-// The shape of the curve, which the single n_D check does not fix: water's F and C line indices at
-// 20 °C relative to air, nF = 1.33712 and nC = 1.33115, and its Abbe number vd ≈ 55.7 (handbook
-// values, common practice, from memory). The fit is divided by n_air as above; n_air varies by
-// about 1e-6 between the F and C lines, negligible here.
-func TestWaterDispersion(t *testing.T) {
-	const (
-		nAir          = 1.00027 // standard air in the visible, Edlén 1966 (from memory)
-		tolHandbookFC = 5e-5    // quoted to 5 decimals, plus the n_air uncertainty
+		sodiumDNM   = 589.29
+		tolHandbook = 2e-5 // quoted to 5 decimals, plus the 5e-6 between 15 °C and 20 °C air
 	)
 	water, _ := Builtin(Water)
 	tests := []struct {
 		line               string
 		wavelengthNM, want float64
 	}{
+		{"D", sodiumDNM, 1.33299},
 		{"F", FLineNM, 1.33712},
 		{"C", CLineNM, 1.33115},
 	}
 	for _, tc := range tests {
-		if got := water.Index(tc.wavelengthNM) / nAir; !approx.Abs(got, tc.want, tolHandbookFC) {
-			t.Errorf("water n%s / n_air = %.6f, want %.5f ± %g (handbook, from memory)", tc.line, got, tc.want, tolHandbookFC)
+		if got := water.Index(tc.wavelengthNM); !approx.Abs(got, tc.want, tolHandbook) {
+			t.Errorf("water n%s = %.6f, want %.5f ± %g (handbook, from memory)", tc.line, got, tc.want, tolHandbook)
 		}
 	}
 	if got := AbbeNumber(water); !approx.Abs(got, 55.7, 2*tolAbbe) {
 		t.Errorf("water vd = %.2f, want 55.7 ± %g (handbook, from memory)", got, 2*tolAbbe)
+	}
+	// The fit itself is relative to vacuum: it exceeds the air-relative value by n_air − 1 ≈ 2.77e-4
+	// in the visible (Ciddor 1996), far beyond the handbook tolerance.
+	fit := water.(OverAir).Vacuum
+	if got := fit.Index(sodiumDNM) - water.Index(sodiumDNM)*StandardAirIndex(sodiumDNM); !approx.Abs(got, 0, approx.Rounding) {
+		t.Errorf("fit − air-relative · n_air = %.3g, want 0", got)
+	}
+	if got := fit.Index(sodiumDNM); approx.Abs(got, 1.33299, tolHandbook) {
+		t.Errorf("the vacuum fit alone gives %.6f, which should differ from the air-relative 1.33299", got)
 	}
 }

@@ -22,6 +22,9 @@ type Point struct {
 	Surface int // index into Path.Surfaces
 	Pos     r3.Vec
 	Dir     r3.Vec
+	// RimMM is the hit's distance from the surface's centre measured as its clear aperture is:
+	// on the surface of a tilted mirror, fold or plate, from the axis on any other face.
+	RimMM float64
 }
 
 // Result is what became of one ray.
@@ -70,11 +73,11 @@ func Trace(p *optics.Path, k int, s Start, buf []Point) Result {
 			r := norm(r3.Sub(hit, r3.Scale(r3.Dot(hit, n0), n0)))
 			out := reflect(hit, n0) // into the leaving (unfolded) frame
 			if r > sf.SemiAperture {
-				pts = append(pts, Point{Surface: i, Pos: out, Dir: dir})
+				pts = append(pts, Point{Surface: i, Pos: out, Dir: dir, RimMM: r})
 				return stop(optics.RayClipped, clipReason(sf, r))
 			}
 			d := reflect(reflect(dir, normal(hit, n0, sf.Curvature)), n0)
-			pts = append(pts, Point{Surface: i, Pos: out, Dir: d})
+			pts = append(pts, Point{Surface: i, Pos: out, Dir: d, RimMM: r})
 			if d.Z <= 0 {
 				return stop(optics.RayMissed, "the ray leaves "+where(sf)+" backwards, against the path")
 			}
@@ -87,13 +90,13 @@ func Trace(p *optics.Path, k int, s Start, buf []Point) Result {
 				case miss != hitOK:
 					return stop(optics.RayMissed, missReason(sf, miss))
 				case r > sf.SemiAperture:
-					pts = append(pts, Point{Surface: i, Pos: hit, Dir: dir})
+					pts = append(pts, Point{Surface: i, Pos: hit, Dir: dir, RimMM: r})
 					return stop(optics.RayClipped, clipReason(sf, r))
 				case !ok:
-					pts = append(pts, Point{Surface: i, Pos: hit, Dir: dir})
+					pts = append(pts, Point{Surface: i, Pos: hit, Dir: dir, RimMM: r})
 					return stop(optics.RayTIR, "total internal reflection at "+where(sf))
 				}
-				pts = append(pts, Point{Surface: i, Pos: hit, Dir: d})
+				pts = append(pts, Point{Surface: i, Pos: hit, Dir: d, RimMM: r})
 				if d.Z <= 0 {
 					return stop(optics.RayMissed, "the ray leaves "+where(sf)+" backwards, against the path")
 				}
@@ -106,16 +109,17 @@ func Trace(p *optics.Path, k int, s Start, buf []Point) Result {
 			if miss != hitOK {
 				return stop(optics.RayMissed, missReason(sf, miss))
 			}
-			if r := math.Hypot(hit.X, hit.Y); r > sf.SemiAperture {
-				pts = append(pts, Point{Surface: i, Pos: hit, Dir: dir})
+			r := math.Hypot(hit.X, hit.Y)
+			if r > sf.SemiAperture {
+				pts = append(pts, Point{Surface: i, Pos: hit, Dir: dir, RimMM: r})
 				return stop(optics.RayClipped, clipReason(sf, r))
 			}
 			d, ok := refract(dir, normal(r3.Vec{X: hit.X * across.X, Y: hit.Y * across.Y, Z: hit.Z}, axis, sf.Curvature), p.IndexBefore(i, k), sf.Index[k])
 			if !ok {
-				pts = append(pts, Point{Surface: i, Pos: hit, Dir: dir})
+				pts = append(pts, Point{Surface: i, Pos: hit, Dir: dir, RimMM: r})
 				return stop(optics.RayTIR, "total internal reflection at "+where(sf))
 			}
-			pts = append(pts, Point{Surface: i, Pos: hit, Dir: d})
+			pts = append(pts, Point{Surface: i, Pos: hit, Dir: d, RimMM: r})
 			if d.Z <= 0 {
 				return stop(optics.RayMissed, "the ray leaves "+where(sf)+" backwards, against the path")
 			}
@@ -130,8 +134,9 @@ func Trace(p *optics.Path, k int, s Start, buf []Point) Result {
 				// A periscope's second mirror: back into the frame of the new heading, X up.
 				hit, dir = rotateAbout(hit, side*sf.RotateRad), rotateAbout(dir, side*sf.RotateRad)
 			}
-			if r := onSurface(hit, sf); r > sf.SemiAperture {
-				pts = append(pts, Point{Surface: i, Pos: hit, Dir: dir})
+			r := onSurface(hit, sf)
+			if r > sf.SemiAperture {
+				pts = append(pts, Point{Surface: i, Pos: hit, Dir: dir, RimMM: r})
 				return stop(optics.RayClipped, clipReason(sf, r))
 			}
 			if sf.Kind == optics.Thin && sf.FocalMM != 0 && !math.IsInf(sf.FocalMM, 0) {
@@ -140,7 +145,7 @@ func Trace(p *optics.Path, k int, s Start, buf []Point) Result {
 				across := acrossCylinder(sf.CylinderAxis)
 				dir = unit(r3.Vec{X: dir.X/dir.Z - across.X*hit.X/sf.FocalMM, Y: dir.Y/dir.Z - across.Y*hit.Y/sf.FocalMM, Z: 1})
 			}
-			pts = append(pts, Point{Surface: i, Pos: hit, Dir: dir})
+			pts = append(pts, Point{Surface: i, Pos: hit, Dir: dir, RimMM: r})
 			if sf.Stops {
 				return stop(optics.RayOK, "absorbed by the beam dump "+sf.ID)
 			}
