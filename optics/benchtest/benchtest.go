@@ -67,6 +67,7 @@ func EveryField(sourceKind string) *optics.Bench {
 		e := optics.DefaultElement(k.Type)
 		e.ID = optics.UniqueID(b, k.Type)
 		e.Mount = &optics.Mount{WidthMM: 40, DepthMM: 20}
+		e.DamageWCM2, e.DamageJCM2 = new(1e6), new(10.0)
 		fillAll(&e, k.Fields)
 		b.Elements = append(b.Elements, e)
 	}
@@ -108,7 +109,10 @@ func fillAll(obj any, fields []optics.Field) {
 	for _, f := range fields {
 		switch p := f.In(obj).(type) {
 		case *string:
-			if *p == "" && !f.Selects && !f.Required {
+			switch {
+			case f.Key == "coating":
+				*p = optics.CoatingNone
+			case *p == "" && !f.Selects && !f.Required:
 				*p = "fused-silica"
 			}
 		case **float64:
@@ -302,6 +306,8 @@ func (c *changer) text(path string, f optics.Field, at place, x string) {
 		c.set(path, f, at, other([]string{optics.ReflectsShorter, optics.ReflectsLonger}, x))
 	case f.Key == "material":
 		c.set(path, f, at, other([]string{"water", "fused-silica"}, x))
+	case f.Key == "coating":
+		c.set(path, f, at, other([]string{optics.CoatingAR, optics.CoatingNone}, x))
 	default:
 		c.set(path, f, at, x+"x")
 	}
