@@ -296,7 +296,7 @@ var (
 	generalLayout   = pick(optics.BenchFields, "title", "wavelengths_nm", "notes")
 	materialsLayout = pick(optics.BenchFields, "materials")
 	sourceHead      = pick(optics.SourceFields, "kind", "x_mm", "y_mm", "heading_deg") // then the kind's own
-	sourceTail      = pick(optics.SourceFields, "fan_rays", "height_mm")
+	sourceTail      = pick(optics.SourceFields, "fan_rays", "height_mm", "power_mw", "pulse")
 )
 
 // pick returns the table entries of keys, in that order. A key without an entry is a programmer's
