@@ -63,3 +63,18 @@ func (s *Source) SourcePower() (averageMW, peakMW, pulseMJ float64, ok bool) {
 	}
 	return 0, 0, 0, false
 }
+
+// ReflectedShare is the fraction a splitter sends to its reflected port at a wavelength: its
+// reflect fraction, or for a dichroic all or nothing by the side of the edge.
+func (e *Element) ReflectedShare(wavelengthNM float64) float64 {
+	if d := e.Dichroic; d != nil {
+		if (d.Reflects == ReflectsShorter) == (wavelengthNM < d.EdgeNM) {
+			return 1
+		}
+		return 0
+	}
+	if e.Reflect != nil {
+		return *e.Reflect
+	}
+	return DefaultReflect
+}

@@ -48,21 +48,30 @@ func trace(p *optics.Path, plane paraxial.Plane, q0 complex128) planeTrace {
 }
 
 // Propagate follows source.beam along p at the primary wavelength in both planes and reports the
-// beam leaving every element, every real waist in air, the envelope for drawing, and warnings for
-// clipping and for beam foci in or next to glass. The report is nil when the source has no beam.
+// beam leaving every element, every real waist in air, the envelope for drawing, the power
+// arriving at each element (README "Power"), and warnings for clipping, for beam foci in or next
+// to glass and for peaks near an element's damage threshold. The report is nil when the source
+// has no beam.
 func Propagate(b *optics.Bench, p *optics.Path) (*optics.BeamReport, []optics.Warning) {
+	rep, warns, _ := propagate(b, p)
+	return rep, warns
+}
+
+// propagate is Propagate that also gives the fraction each element's clear apertures pass, by
+// span (nil without a beam).
+func propagate(b *optics.Bench, p *optics.Path) (*optics.BeamReport, []optics.Warning, []float64) {
 	if b == nil || p == nil || b.Source.Beam == nil {
-		return nil, nil
+		return nil, nil, nil
 	}
 	bm := b.Source.Beam
 	m2 := bm.BeamQuality()
 	if len(p.WavelengthsNM) == 0 || !(p.WavelengthsNM[0] > 0) || !(bm.WaistRadiusMM > 0) || !(m2 > 0) ||
 		math.IsInf(bm.WaistRadiusMM, 0) || math.IsInf(m2, 0) || math.IsNaN(bm.WaistAtMM) || math.IsInf(bm.WaistAtMM, 0) {
-		return nil, []optics.Warning{{Code: CodeBeamInvalid, Message: "source.beam needs a positive finite waist_radius_mm and m2, a finite waist_at_mm and a positive wavelength; the beam was not computed"}}
+		return nil, []optics.Warning{{Code: CodeBeamInvalid, Message: "source.beam needs a positive finite waist_radius_mm and m2, a finite waist_at_mm and a positive wavelength; the beam was not computed"}}, nil
 	}
 	for i := range p.Surfaces {
 		if len(p.Surfaces[i].Index) == 0 {
-			return nil, []optics.Warning{{Code: CodeBeamInvalid, Element: p.Surfaces[i].ID, Message: "the path has no index for this surface; the beam was not computed"}}
+			return nil, []optics.Warning{{Code: CodeBeamInvalid, Element: p.Surfaces[i].ID, Message: "the path has no index for this surface; the beam was not computed"}}, nil
 		}
 	}
 	lam := p.WavelengthsNM[0]
@@ -71,27 +80,33 @@ func Propagate(b *optics.Bench, p *optics.Path) (*optics.BeamReport, []optics.Wa
 	t := trace(p, paraxial.Tangential, q0)
 	s := trace(p, paraxial.Sagittal, q0)
 	if at, angle, broke := breakdown(p, g, &t, &s); broke {
-		return nil, []optics.Warning{notParaxialWarning(p, at, angle)}
+		return nil, []optics.Warning{notParaxialWarning(p, at, angle)}, nil
 	}
 	st := stretches(p)
 
 	rep := &optics.BeamReport{WavelengthNM: lam, M2: m2, Elements: make([]optics.BeamAt, 0, len(p.Spans))}
 	var warns []optics.Warning
 	lit := litStretches(p) // surfaces before index lit reach light; nothing passes a dump
-	for _, sp := range p.Spans {
+	pass := make([]float64, len(p.Spans))
+	var spanOf []int // the span of each row
+	for ei, sp := range p.Spans {
+		pass[ei] = 1
 		row, faces, ok := elementRow(p, g, &t, &s, sp)
 		if !ok {
 			continue
 		}
+		pass[ei] = row.Transmitted
 		rep.Elements = append(rep.Elements, row)
+		spanOf = append(spanOf, ei)
 		if row.Transmitted < PassFraction && sp.First < lit {
 			warns = append(warns, clipWarning(row, faces))
 		}
 	}
+	warns = append(warns, fillPower(b, rep.Elements, spanOf, powerBudget(b, p, pass))...)
 	rep.Waists = waists(p, g, st, &t, &s)
 	rep.Samples = samples(p, g, st, &t, &s)
 	warns = append(warns, beamFocusWarnings(p, g, st, &t, &s)...)
-	return rep, warns
+	return rep, warns, pass
 }
 
 // elementRow is the beam at one element: arriving at its first face, leaving its last, and the
