@@ -25,6 +25,9 @@ func fillPower(b *optics.Bench, rows []optics.BeamAt, spanOf []int, budget []ele
 		}
 		irr := PeakIrradianceWCM2(row.PowerFraction*peakMW/1000, row.ArrivingWTMM, row.ArrivingWSMM)
 		row.PeakIrradianceWCM2 = &irr
+		if ei >= len(b.Elements) {
+			continue // a hand-built path without its elements states no thresholds
+		}
 		e := &b.Elements[ei]
 		if d := e.DamageWCM2; d != nil && irr >= optics.DamageWarnShare**d {
 			warns = append(warns, damageWarning(row.ID, "irradiance", irr, *d, "W/cm²"))
@@ -43,7 +46,7 @@ func fillPower(b *optics.Bench, rows []optics.BeamAt, spanOf []int, budget []ele
 func damageWarning(id, what string, peak, threshold float64, unit string) optics.Warning {
 	return optics.Warning{Code: optics.WarnDamageRisk, Element: id,
 		Message: fmt.Sprintf("the beam's peak %s on %s is %s %s, %s %% of its damage threshold of %s %s; keep below half of it (common practice).",
-			what, id, numfmt.Rough.Format(peak), unit, numfmt.Rough.Format(100*peak/threshold), numfmt.Rough.Format(threshold), unit)}
+			what, id, numfmt.Message.Format(peak), unit, numfmt.Message.Format(100*peak/threshold), numfmt.Message.Format(threshold), unit)}
 }
 
 // budgetOf is the power budget of p with the clear apertures the source's beam meets (all of the
@@ -74,7 +77,7 @@ func PowerWarnings(b *optics.Bench, p *optics.Path) []optics.Warning {
 		id := b.Elements[ei].ID
 		warns = append(warns, optics.Warning{Code: optics.WarnMirrorLeak, Element: id,
 			Message: fmt.Sprintf("%s lets %s %% of the arriving power through: a stray beam of about %s mW behind it; end it on a dump or a card.",
-				id, numfmt.Rough.Format(100*leak/ep.Arriving), numfmt.Rough.Format(leak*avgMW))})
+				id, numfmt.Message.Format(100*leak/ep.Arriving), numfmt.Message.Format(leak*avgMW))})
 	}
 	return warns
 }

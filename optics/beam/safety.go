@@ -96,7 +96,7 @@ func ghostPower(b *optics.Bench, p *optics.Path, faces map[int]bool, index map[[
 			}
 			s := &p.Surfaces[l.surface]
 			if i, ok := index[[2]string{string(CodeBackReflection), ghostKey(s)}]; ok {
-				out[i].Message += fmt.Sprintf(" The ghost carries about %s mW.", numfmt.Rough.Format(l.share*avgMW))
+				out[i].Message += fmt.Sprintf(" The ghost carries about %s mW.", numfmt.Message.Format(l.share*avgMW))
 			}
 		}
 	}
