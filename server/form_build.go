@@ -75,7 +75,11 @@ func putFields(v map[string]string, prefix string, fields []optics.Field, obj an
 			}
 		case **optics.Dichroic:
 			if *x != nil {
-				v[path] = dichroicText(*x)
+				v[path] = jsonText(*x)
+			}
+		case **optics.Pulse:
+			if *x != nil {
+				v[path] = jsonText(*x)
 			}
 		case *[]optics.Element:
 			putElements(v, path, *x)
