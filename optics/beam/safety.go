@@ -91,7 +91,8 @@ func ghostPower(b *optics.Bench, p *optics.Path, faces map[int]bool, index map[[
 	}
 	for _, ep := range budgetOf(b, p) {
 		for _, l := range ep.losses {
-			if !faces[l.surface] || l.kind != lossGhost {
+			// A splitter plate's first face reflects its split: that is the light it sends back.
+			if !faces[l.surface] || l.kind == lossLeak {
 				continue
 			}
 			s := &p.Surfaces[l.surface]
