@@ -327,7 +327,8 @@ func continuing(v *visit) Element {
 // reflected port: a flat mirror with the splitter's diameter, mount and computed turn.
 func reflectedPort(v *visit) Element {
 	return Element{ID: v.E.ID, Type: TypeMirror, GapMM: v.E.GapMM, TurnDeg: new(v.TurnDeg),
-		DiameterMM: v.Part.DiameterMM, Mount: v.Part.Mount}
+		DiameterMM: v.Part.DiameterMM, Mount: v.Part.Mount,
+		Reflect: v.Part.Reflect, Dichroic: v.Part.Dichroic} // its split, for the power (README "Power")
 }
 
 // reversedLens is a lens met from its last face: faces in reverse order with their radii negated

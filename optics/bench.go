@@ -105,6 +105,16 @@ type Source struct {
 
 	// sources and targets: a fibre source's mode field diameter (1/e² intensity) at the primary wavelength
 	MFDUM *float64 `json:"mfd_um,omitempty"`
+	// power: the laser's output, as a steady power or as pulses (not both; README "Power")
+	PowerMW *float64 `json:"power_mw,omitempty"`
+	Pulse   *Pulse   `json:"pulse,omitempty"`
+}
+
+// Pulse is a pulsed laser's output: the energy of one pulse, its duration and the repetition rate.
+type Pulse struct {
+	EnergyUJ   float64 `json:"energy_uj"`
+	DurationNS float64 `json:"duration_ns"`
+	RateHz     float64 `json:"rate_hz"`
 }
 
 // FanRayCount is the number of rays in each fan.
@@ -214,6 +224,13 @@ type Element struct {
 	WaistRadiusMM *float64   `json:"waist_radius_mm,omitempty"`
 	WaistAtMM     *float64   `json:"waist_at_mm,omitempty"`
 	Sagittal      *BeamPlane `json:"sagittal,omitempty"`
+	// power (README "Power"): each face's reflection (lens, thin lens, splitter plate), a
+	// mirror's reflectance, and the damage thresholds of any element
+	Coating         string   `json:"coating,omitempty"`          // CoatingAR (default) or CoatingNone
+	FaceReflectance *float64 `json:"face_reflectance,omitempty"` // a stated reflectance per face, 0 to 1; it overrides coating
+	Reflectance     *float64 `json:"reflectance,omitempty"`      // mirror: fraction reflected, 0 to 1; DefaultMirrorReflectance when absent
+	DamageWCM2      *float64 `json:"damage_w_cm2,omitempty"`     // damage threshold for peak irradiance
+	DamageJCM2      *float64 `json:"damage_j_cm2,omitempty"`     // damage threshold for peak fluence of one pulse
 }
 
 // Dichroic is a splitter's wavelength edge: each wavelength on the Reflects side of EdgeNM is

@@ -177,6 +177,14 @@ var (
 		{Key: "beam", Fields: BeamFields},
 		{Key: "fan_rays", Label: "rays per fan (empty: " + strconv.Itoa(DefaultFanRays) + ")", Absent: strconv.Itoa(DefaultFanRays)},
 		{Key: "height_mm", Label: "beam height (empty: the table's)", Quantity: Length, Absent: "the table's"},
+		// power (README "Power")
+		{Key: "power_mw", Label: "power in mW (empty: not stated)", Quantity: Plain},
+		{Key: "pulse", Label: "pulses (JSON: energy_uj, duration_ns, rate_hz)", Multiline: true, Fields: PulseFields},
+	}
+	PulseFields = []Field{
+		{Key: "energy_uj", Label: "pulse energy in µJ", Quantity: Plain, Required: true},
+		{Key: "duration_ns", Label: "pulse duration in ns", Quantity: Plain, Required: true},
+		{Key: "rate_hz", Label: "repetition rate in Hz", Quantity: Plain, Required: true},
 	}
 	RayFields = []Field{
 		{Key: "height_mm", Label: "height", Quantity: Length, Required: true},
@@ -214,6 +222,9 @@ var (
 		{Key: "gap_mm", Label: "gap from the previous element", Quantity: Length, Required: true},
 		{Key: "mount", Fields: MountFields},
 		{Key: "same_as", Label: "another pass through"},
+		// power (README "Power")
+		{Key: "damage_w_cm2", Label: "damage threshold in W/cm² (empty: none)", Quantity: Plain},
+		{Key: "damage_j_cm2", Label: "damage threshold in J/cm² (empty: none)", Quantity: Plain},
 	}
 	// moreSourceOwnFields are a further source's own fields; the source fields (SourceFields and
 	// the kind's) stand inline beside them (MoreSourceFields).
@@ -258,6 +269,7 @@ var tables = map[reflect.Type][]Field{
 	reflect.TypeFor[Dichroic]():      DichroicFields,
 	reflect.TypeFor[MoreSource]():    MoreSourceFields,
 	reflect.TypeFor[BeamPlane]():     BeamPlaneFields, // sources and targets
+	reflect.TypeFor[Pulse]():         PulseFields,
 }
 
 // withKinds is common followed by the fields of every kind, each key once (see union).

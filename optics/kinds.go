@@ -46,16 +46,19 @@ var (
 		{Key: "materials", Label: "materials (comma list)"},
 		clearDiameter,
 		cylinderAxis,
+		coating, faceReflectance,
 	}
 	thinLensFields = []Field{
 		{Key: "focal_mm", Label: "focal length", Quantity: Length, Required: true, Hint: "use a length such as 100 mm"},
 		clearDiameter,
 		cylinderAxis,
+		coating, faceReflectance,
 	}
 	mirrorFields = []Field{
 		{Key: "radius_mm", Label: "radius (+ concave, flat)", Quantity: Length, Flat: true},
 		turn("turn (+ counter-clockwise)"),
 		clearDiameter,
+		{Key: "reflectance", Label: "reflectance (empty: 0.99)", Quantity: Plain, Absent: "0.99"},
 	}
 	splitterFields = []Field{
 		turn("turn of the reflected beam (+ counter-clockwise)"),
@@ -65,6 +68,7 @@ var (
 		{Key: "material", Label: "plate material"},
 		clearDiameter,
 		{Key: "reflected", Fields: ElementFields},
+		coating, faceReflectance,
 	}
 	periscopeFields = []Field{
 		{Key: "rise_mm", Label: "rise (+ up)", Quantity: Length, Required: true, About: "how far it lifts the beam",
@@ -73,6 +77,13 @@ var (
 		clearDiameter,
 	}
 	screenFields = []Field{{Key: "width_mm", Label: "width (empty: unlimited)", Quantity: Length}}
+)
+
+// The reflection of refracting faces (README "Power"): a lens's, a thin lens's two, a splitter
+// plate's back face.
+var (
+	coating         = Field{Key: "coating", Label: "coating (ar or uncoated; empty: ar)", Absent: CoatingAR}
+	faceReflectance = Field{Key: "face_reflectance", Label: "reflectance per face (empty: by coating)", Quantity: Plain, Absent: "by coating"}
 )
 
 // turn is the heading change of a mirror, a splitter's reflected port or a periscope: one meaning,

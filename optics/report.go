@@ -39,6 +39,9 @@ type Report struct {
 
 	// sources and targets: the beam's coupling into each fibre and mode target it reaches
 	Coupling []Coupling `json:"coupling,omitempty"`
+	// Power is the power the bench carries (README "Power"): each source's output and the stray
+	// beams it sends off; absent when no source states a power or pulse.
+	Power *PowerReport `json:"power,omitempty"`
 }
 
 // MediumIndex is the index of one medium used on the bench at one wavelength.
@@ -205,6 +208,12 @@ type BeamAt struct {
 	Transmitted  float64  `json:"transmitted"`
 	ArrivingWTMM float64  `json:"arriving_w_t_mm"`
 	ArrivingWSMM float64  `json:"arriving_w_s_mm"`
+
+	// power (README "Power"): the fraction of the source's power arriving at the element, and the
+	// peak irradiance and fluence of the arriving beam where the source states a power or pulse
+	PowerFraction      float64  `json:"power_fraction"`
+	PeakIrradianceWCM2 *float64 `json:"peak_irradiance_w_cm2,omitempty"`
+	PeakFluenceJCM2    *float64 `json:"peak_fluence_j_cm2,omitempty"`
 }
 
 // Waist is a beam waist in air between elements.
@@ -362,4 +371,34 @@ type Coupling struct {
 	LateralVerticalMM   *float64 `json:"lateral_vertical_1db_mm"`
 	AngularMrad         *float64 `json:"angular_1db_mrad"`
 	AngularVerticalMrad *float64 `json:"angular_vertical_1db_mrad"`
+}
+
+// PowerReport is the power a bench carries, at each source's primary wavelength.
+type PowerReport struct {
+	Sources []SourcePowerLevel `json:"sources"` // each source that states a power or pulse
+	Strays  []StrayBeam        `json:"strays"`  // every stray beam, strongest first
+}
+
+// SourcePowerLevel is what one source emits.
+type SourcePowerLevel struct {
+	Source       string   `json:"source"` // "source" or the further source's id
+	WavelengthNM float64  `json:"wavelength_nm"`
+	AverageMW    float64  `json:"average_mw"`
+	PeakMW       float64  `json:"peak_mw"`            // power during a pulse: energy / duration; the average for a steady laser
+	PulseMJ      *float64 `json:"pulse_mj,omitempty"` // energy of one pulse
+}
+
+// Stray-beam kinds.
+const (
+	StrayLeak  = "leak"  // the light a mirror lets through
+	StrayGhost = "ghost" // the reflection off a refracting face, back upstream
+	StrayPort  = "port"  // a splitter's port that no element takes
+)
+
+// StrayBeam is light that leaves the intended path: its average power in mW.
+type StrayBeam struct {
+	Element string  `json:"element"`
+	Face    *int    `json:"face,omitempty"` // the face of a ghost
+	Kind    string  `json:"kind"`           // StrayLeak, StrayGhost or StrayPort
+	PowerMW float64 `json:"power_mw"`
 }

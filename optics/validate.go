@@ -214,6 +214,7 @@ func (v *checker) sourceAt(path string, s *Source) {
 	if s.HeightMM != nil {
 		v.nonNegative(at("height_mm"), *s.HeightMM)
 	}
+	v.sourcePower(path, s)
 }
 
 // collimated checks the fields of a collimated source.

@@ -115,6 +115,7 @@ func (v *checker) element(p string, e *Element, firstUse map[string]string, plac
 	// Checked on every type, so that a stray diameter also hears when it is not positive.
 	diameterOK := e.DiameterMM == nil || v.positive(field(p, "diameter_mm"), *e.DiameterMM)
 	v.need(p, ev, k.Fields, k.Noun)
+	v.elementPower(p, e)
 	if k.check != nil {
 		k.check(v, p, e, diameterOK)
 	}

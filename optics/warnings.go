@@ -28,6 +28,8 @@ const (
 	WarnFocusMissesScreen   WarningCode = "focus-misses-screen"
 	// Glass-code accuracy (README 'Media').
 	WarnGlassCodePoor WarningCode = "glass-code-poor"
+	WarnMirrorLeak    WarningCode = "mirror-leak"
+	WarnDamageRisk    WarningCode = "damage-risk"
 )
 
 // WarningCodes is every code with what it means, in the order the README lists them.
@@ -56,6 +58,8 @@ var WarningCodes = []struct {
 	{WarnImageRotated, "a periscope turns the beam by an angle that is not a multiple of 90°: the image is rotated, the exact trace is right, the paraxial and beam values downstream are in the rotated planes"},
 	{WarnFocusMissesScreen, "the beam's waist lies farther from a screen than its Rayleigh range, in front of it (after the element before it) or behind it; the message says how far"},
 	{WarnGlassCodePoor, "a medium given by nd and vd (a glass code) is used where the two-term model errs by more than 1e-3 in index (measured: flints below 470 nm, dense flints above 740 nm, every glass above 870 nm); give a Sellmeier fit"},
+	{WarnMirrorLeak, "a mirror lets the part of the power it does not reflect through as a stray beam; given when the source states a power, the message gives it in mW"},
+	{WarnDamageRisk, "the beam's peak irradiance or fluence on an element reaches half its damage_w_cm2 or damage_j_cm2 (common practice)"},
 }
 
 // Meaning says what the code means; "" for a code that is not in WarningCodes.

@@ -1,8 +1,6 @@
 package server
 
 import (
-	"bytes"
-	"encoding/json"
 	"fmt"
 
 	"raytable/optics"
@@ -45,30 +43,9 @@ func moreSourcePrefix(k int) string { return fmt.Sprintf("more_sources[%d].", k)
 // are written and read as those are.
 var moreSourceOwn = pick(optics.MoreSourceFields, "id", "wavelengths_nm", "elements")
 
-// dichroicText is a dichroic edge as the form's JSON text, as in the bench file.
-func dichroicText(d *optics.Dichroic) string {
-	data, err := json.Marshal(d)
-	if err != nil {
-		return ""
-	}
-	return string(data)
-}
-
-// dichroic reads a dichroic edge written as JSON; an empty field is none. Unknown keys are a
-// problem at the field, as they are in the bench file; the edge's rules are Validate's.
+// dichroic reads a dichroic edge written as JSON (jsonObject).
 func (f *formReader) dichroic(path string) *optics.Dichroic {
-	s := f.text(path)
-	if s == "" {
-		return nil
-	}
-	dec := json.NewDecoder(bytes.NewReader([]byte(s)))
-	dec.DisallowUnknownFields()
-	d := new(optics.Dichroic)
-	if err := dec.Decode(d); err != nil {
-		f.add(path, "is not a dichroic edge: %v; write it as in the bench file, e.g. {\"edge_nm\": 550, \"reflects\": \"shorter\"}", err)
-		return nil
-	}
-	return d
+	return jsonObject[optics.Dichroic](f, path, "a dichroic edge", `{"edge_nm": 550, "reflects": "shorter"}`)
 }
 
 // maxFormDepth bounds how deep a posted form's nested lists are read; the bench rules allow

@@ -75,7 +75,11 @@ func putFields(v map[string]string, prefix string, fields []optics.Field, obj an
 			}
 		case **optics.Dichroic:
 			if *x != nil {
-				v[path] = dichroicText(*x)
+				v[path] = jsonText(*x)
+			}
+		case **optics.Pulse:
+			if *x != nil {
+				v[path] = jsonText(*x)
 			}
 		case *[]optics.Element:
 			putElements(v, path, *x)
@@ -296,7 +300,7 @@ var (
 	generalLayout   = pick(optics.BenchFields, "title", "wavelengths_nm", "notes")
 	materialsLayout = pick(optics.BenchFields, "materials")
 	sourceHead      = pick(optics.SourceFields, "kind", "x_mm", "y_mm", "heading_deg") // then the kind's own
-	sourceTail      = pick(optics.SourceFields, "fan_rays", "height_mm")
+	sourceTail      = pick(optics.SourceFields, "fan_rays", "height_mm", "power_mw", "pulse")
 )
 
 // pick returns the table entries of keys, in that order. A key without an entry is a programmer's

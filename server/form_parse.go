@@ -239,6 +239,8 @@ func (f *formReader) field(path string, fl optics.Field, obj any) {
 		}
 	case **optics.Dichroic:
 		*p = f.dichroic(path)
+	case **optics.Pulse:
+		*p = jsonObject[optics.Pulse](f, path, "a pulse", `{"energy_uj": 10, "duration_ns": 5, "rate_hz": 1000}`)
 	case *[]optics.Element:
 		if f.depth >= maxFormDepth {
 			f.add(path, "nests more than %d lists", maxFormDepth)

@@ -28,7 +28,8 @@ func valuesOf(m map[string]string) url.Values {
 func TestFormRoundTrip(t *testing.T) {
 	point := strings.Replace(everyField, `"kind": "collimated", "semi_diameter_mm": 1.5,
     "field_angles_deg": [0, 0.1]`, `"kind": "point", "na": 0.05, "object_heights_mm": [0, 1]`, 1)
-	for name, data := range map[string][]byte{"demo": demo.Bench, "every field": []byte(everyField), "point source": []byte(point)} {
+	pulsed := strings.Replace(everyField, `"kind": "collimated",`, `"kind": "collimated", "pulse": {"energy_uj": 10, "duration_ns": 5, "rate_hz": 1000},`, 1)
+	for name, data := range map[string][]byte{"demo": demo.Bench, "every field": []byte(everyField), "point source": []byte(point), "pulsed source": []byte(pulsed)} {
 		t.Run(name, func(t *testing.T) {
 			b, err := optics.Decode(data)
 			if err != nil {

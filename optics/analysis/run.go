@@ -43,6 +43,7 @@ func runArms(b *optics.Bench, arms []optics.Arm) *optics.Report {
 		lengths[i] = newPathLengths(arms[i].Bench)
 	}
 	r.Arms = armReports(arms, full, lengths)
+	r.Power = beam.CombinePower(arms, full)
 	r.Meetings = meetings(arms, full, lengths)
 	r.Warnings = append(r.Warnings, armWarnings(arms, r)...)
 	r.Board.Arms = boardArms(arms, r)
@@ -83,6 +84,8 @@ func linear(b *optics.Bench, main, plan bool) *optics.Report {
 	r.Warnings = append(r.Warnings, beamWarnings...)
 	r.Coupling = beam.Couplings(b, p)
 	r.Warnings = append(r.Warnings, beam.SafetyWarnings(b, p)...)
+	r.Warnings = append(r.Warnings, beam.PowerWarnings(b, p)...)
+	r.Power = beam.PowerReport(b, p)
 
 	r.Holes = layout.Holes(b.Table).HoleGrid
 	var planWarnings []optics.Warning

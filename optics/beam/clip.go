@@ -70,11 +70,16 @@ func FractionInCircle(aMM, wxMM, wyMM float64) float64 {
 // measured on the optic (a tilted mirror stretches the tangential one by 1/cos i).
 type footprint struct{ aMM, wtMM, wsMM float64 }
 
-// passed is the product over faces of the fraction each passes.
+// passed is the fraction of the beam that passes all of an element's clear apertures together:
+// the fraction inside their intersection, not the product of each face's fraction, which would
+// count a ring clipped at one face again at the next. The apertures are coaxial circles on the
+// element's faces and the beam between them scales nearly alike in both planes, so measured in
+// beam radii they are nested: the one that passes least bounds all the others, and governs
+// (README "Power"). A tilted face keeps its footprint, the ellipse of FractionInCircle.
 func passed(faces []footprint) float64 {
 	t := 1.0
 	for _, f := range faces {
-		t *= FractionInCircle(f.aMM, f.wtMM, f.wsMM)
+		t = math.Min(t, FractionInCircle(f.aMM, f.wtMM, f.wsMM))
 	}
 	return t
 }
@@ -83,7 +88,7 @@ func passed(faces []footprint) float64 {
 func passedWith(faces []footprint, aMM float64) float64 {
 	t := 1.0
 	for _, f := range faces {
-		t *= FractionInCircle(aMM, f.wtMM, f.wsMM)
+		t = math.Min(t, FractionInCircle(aMM, f.wtMM, f.wsMM))
 	}
 	return t
 }

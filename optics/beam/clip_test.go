@@ -94,7 +94,7 @@ func TestClearDiameterFor99(t *testing.T) {
 }
 
 // Propagate: an aperture of radius w at the waist passes 86.47 % (Siegman 1986) and warns with
-// the element, the percentage and the 99 % diameter; a lens multiplies its faces; a tilted mirror
+// the element, the percentage and the 99 % diameter; a lens passes what its tightest face does; a tilted mirror
 // sees w_t/cos i.
 func TestTransmittedAndWarning(t *testing.T) {
 	const w0 = 1.0
@@ -116,15 +116,17 @@ func TestTransmittedAndWarning(t *testing.T) {
 		}
 	}
 
-	// A lens: the product over its two faces, each with the beam size there.
+	// A lens: the beam inside the intersection of its two faces' apertures, each with the beam
+	// size there: the face that passes least governs (definition of the intersection).
 	lp := buildPath(hene, lens("L", 100, 80, -80, 10, 1.5).clear(3), plane("S", 100, 0))
 	lrep, _ := Propagate(beamBench(hene, 1, 0, 1), lp)
 	g := newGaussian(hene, 1)
 	q0 := g.sourceQ(1, 0)
 	tr := trace(lp, 0, g, q0)
-	want := FractionInCircle(1.5, g.radiusMM(tr.arrive[0]), g.radiusMM(tr.arrive[0])) * FractionInCircle(1.5, g.radiusMM(tr.arrive[1]), g.radiusMM(tr.arrive[1]))
-	if got := row(lrep, "L").Transmitted; !approx.Abs(got, want, clipTol) || got >= FractionInCircle(1.5, g.radiusMM(tr.arrive[0]), g.radiusMM(tr.arrive[0])) {
-		t.Errorf("lens transmitted %v, want product %v", got, want)
+	f0 := FractionInCircle(1.5, g.radiusMM(tr.arrive[0]), g.radiusMM(tr.arrive[0]))
+	f1 := FractionInCircle(1.5, g.radiusMM(tr.arrive[1]), g.radiusMM(tr.arrive[1]))
+	if got := row(lrep, "L").Transmitted; !approx.Abs(got, math.Min(f0, f1), clipTol) || got <= f0*f1 {
+		t.Errorf("lens transmitted %v, want the smaller face's %v (not the product %v)", got, math.Min(f0, f1), f0*f1)
 	}
 
 	// A flat mirror turning the beam 90° (incidence 45°): footprint w/cos 45° by w on the mirror.
@@ -144,5 +146,29 @@ func TestPassRadiusPerW(t *testing.T) {
 	}
 	if !approx.Abs(PassRadiusPerW, 1.517427, 1e-6) { // √(ln 100 / 2), by hand
 		t.Errorf("PassRadiusPerW = %.7f, want 1.517427", PassRadiusPerW)
+	}
+}
+
+// TestPassedUnion: two coaxial round apertures on one beam pass what the smaller passes
+// (definition of the intersection of nested circles), while the product of the two fractions
+// would count the ring the smaller clips once more and give less.
+func TestPassedUnion(t *testing.T) {
+	for _, tc := range []struct {
+		name            string
+		small, big, wMM float64
+	}{
+		{"one beam radius and twice it", 1, 2, 1},
+		{"equal apertures", 1.5, 1.5, 1},
+		{"a wide second aperture", 0.8, 3, 1},
+	} {
+		faces := []footprint{{aMM: tc.big, wtMM: tc.wMM, wsMM: tc.wMM}, {aMM: tc.small, wtMM: tc.wMM, wsMM: tc.wMM}}
+		want := -math.Expm1(-2 * tc.small * tc.small / (tc.wMM * tc.wMM)) // 1 - exp(-2a²/w²) (Siegman 1986)
+		got := passed(faces)
+		if !approx.Abs(got, want, clipTol) {
+			t.Errorf("%s: passed %v, want the smaller aperture's %v", tc.name, got, want)
+		}
+		if product := FractionInCircle(tc.big, tc.wMM, tc.wMM) * want; !(product < got) {
+			t.Errorf("%s: the product %v should be less than the union %v", tc.name, product, got)
+		}
 	}
 }

@@ -49,15 +49,24 @@ func trace(p *optics.Path, plane paraxial.Plane, g gaussian, q0 complex128) plan
 }
 
 // Propagate follows source.beam along p at the primary wavelength in both planes and reports the
-// beam leaving every element, every real waist in air, the envelope for drawing, and warnings for
-// clipping and for beam foci in or next to glass. The report is nil when the source has no beam.
+// beam leaving every element, every real waist in air, the envelope for drawing, the power
+// arriving at each element (README "Power"), and warnings for clipping, for beam foci in or next
+// to glass and for peaks near an element's damage threshold. The report is nil when the source
+// has no beam.
 func Propagate(b *optics.Bench, p *optics.Path) (*optics.BeamReport, []optics.Warning) {
+	rep, warns, _ := propagate(b, p)
+	return rep, warns
+}
+
+// propagate is Propagate that also gives the fraction each element's clear apertures pass, by
+// span (nil without a beam).
+func propagate(b *optics.Bench, p *optics.Path) (*optics.BeamReport, []optics.Warning, []float64) {
 	if b == nil || p == nil || b.Source.GaussianBeam() == nil {
-		return nil, nil
+		return nil, nil, nil
 	}
 	t, s, warn := sourceTraces(b, p)
 	if warn != nil {
-		return nil, []optics.Warning{*warn}
+		return nil, []optics.Warning{*warn}, nil
 	}
 	g, lam, m2 := t.g, p.WavelengthsNM[0], b.Source.GaussianBeam().BeamQuality()
 	st := stretches(p)
@@ -65,23 +74,29 @@ func Propagate(b *optics.Bench, p *optics.Path) (*optics.BeamReport, []optics.Wa
 	rep := &optics.BeamReport{WavelengthNM: lam, M2: m2, Elements: make([]optics.BeamAt, 0, len(p.Spans))}
 	var warns []optics.Warning
 	lit := litStretches(p) // surfaces before index lit reach light; nothing passes a dump
-	for _, sp := range p.Spans {
+	pass := make([]float64, len(p.Spans))
+	var spanOf []int // the span of each row
+	for ei, sp := range p.Spans {
+		pass[ei] = 1
 		row, faces, ok := elementRow(p, g, &t, &s, sp)
 		if !ok {
 			continue
 		}
+		pass[ei] = row.Transmitted
 		rep.Elements = append(rep.Elements, row)
+		spanOf = append(spanOf, ei)
 		if row.Transmitted < PassFraction && sp.First < lit {
 			warns = append(warns, clipWarning(row, faces))
 		}
 	}
+	warns = append(warns, fillPower(b, rep.Elements, spanOf, powerBudget(b, p, pass))...)
 	rep.Waists = waists(p, g, st, &t, &s)
 	rep.Samples = samples(p, g, st, &t, &s)
 	rep.Output = outputBeam(p, g, st, &t, &s)
 	rep.GlassWaists = glassWaists(p, g, st, &t, &s)
 	warns = append(warns, screenFocusWarnings(b, p, &t, &s)...)
 	warns = append(warns, beamFocusWarnings(p, g, st, &t, &s)...)
-	return rep, warns
+	return rep, warns, pass
 }
 
 // elementRow is the beam at one element: arriving at its first face, leaving its last, and the

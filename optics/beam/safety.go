@@ -43,6 +43,7 @@ func SafetyWarnings(b *optics.Bench, p *optics.Path) []optics.Warning {
 	}
 	st := stretches(p)
 	var ws warnSet
+	ghosts := map[int]bool{} // the faces whose reflection comes to a hazardous focus
 	for _, plane := range []paraxial.Plane{paraxial.Tangential, paraxial.Sagittal} {
 		arrive, leave := traceRay(p, plane, r0)
 		lit := st[:len(arrive)+1]
@@ -68,11 +69,38 @@ func SafetyWarnings(b *optics.Bench, p *optics.Path) []optics.Warning {
 			}
 			if where, hit := backReflection(p, st, j, arrive[j], plane); hit {
 				s := &p.Surfaces[j]
-				ws.add(CodeBackReflection, s.ID, fmt.Sprintf("%s face %d", s.ID, s.Face), plane, fmt.Sprintf("the reflection off face %d of %s goes back upstream and comes to a focus %s", s.Face, s.ID, where))
+				ws.add(CodeBackReflection, s.ID, ghostKey(s), plane, fmt.Sprintf("the reflection off face %d of %s goes back upstream and comes to a focus %s", s.Face, s.ID, where))
+				ghosts[j] = true
 			}
 		}
 	}
-	return ws.list()
+	out := ws.list()
+	ghostPower(b, p, ghosts, ws.index, out)
+	return out
+}
+
+func ghostKey(s *optics.Surface) string { return fmt.Sprintf("%s face %d", s.ID, s.Face) }
+
+// ghostPower adds to each back-reflection warning the power its ghost carries, when the source
+// states one: the power arriving at the face (after the clear apertures and the faces before it)
+// times the face's reflectance (README "Power").
+func ghostPower(b *optics.Bench, p *optics.Path, faces map[int]bool, index map[[2]string]int, out []optics.Warning) {
+	avgMW, _, _, stated := b.Source.SourcePower()
+	if !stated || len(faces) == 0 {
+		return
+	}
+	for _, ep := range budgetOf(b, p) {
+		for _, l := range ep.losses {
+			// A splitter plate's first face reflects its split: that is the light it sends back.
+			if !faces[l.surface] || l.kind == lossLeak {
+				continue
+			}
+			s := &p.Surfaces[l.surface]
+			if i, ok := index[[2]string{string(CodeBackReflection), ghostKey(s)}]; ok {
+				out[i].Message += fmt.Sprintf(" The ghost carries about %s mW.", numfmt.Message.Format(l.share*avgMW))
+			}
+		}
+	}
 }
 
 // traceRay follows a paraxial ray in one plane at the primary wavelength up to the first dump

@@ -67,6 +67,7 @@ func EveryField(sourceKind string) *optics.Bench {
 		e := optics.DefaultElement(k.Type)
 		e.ID = optics.UniqueID(b, k.Type)
 		e.Mount = &optics.Mount{WidthMM: 40, DepthMM: 20}
+		e.DamageWCM2, e.DamageJCM2 = new(1e6), new(10.0)
 		fillAll(&e, k.Fields)
 		b.Elements = append(b.Elements, e)
 	}
@@ -108,10 +109,12 @@ func fillAll(obj any, fields []optics.Field) {
 	for _, f := range fields {
 		switch p := f.In(obj).(type) {
 		case *string:
-			if *p == "" && len(f.Choices) > 0 {
+			switch {
+			case f.Key == "coating":
+				*p = optics.CoatingNone
+			case *p == "" && len(f.Choices) > 0:
 				*p = f.Choices[0]
-			}
-			if *p == "" && !f.Selects && !f.Required {
+			case *p == "" && !f.Selects && !f.Required:
 				*p = "fused-silica"
 			}
 		case **float64:
@@ -307,6 +310,8 @@ func (c *changer) text(path string, f optics.Field, at place, x string) {
 		c.set(path, f, at, other(f.Choices, x))
 	case f.Key == "material":
 		c.set(path, f, at, other([]string{"water", "fused-silica"}, x))
+	case f.Key == "coating":
+		c.set(path, f, at, other([]string{optics.CoatingAR, optics.CoatingNone}, x))
 	default:
 		c.set(path, f, at, x+"x")
 	}

@@ -49,6 +49,9 @@ func Plan(r *optics.Report) []byte {
 	posts := postLines(r.Placement, chars)
 	warns := warningLines(r.Warnings, chars-4)
 	caution := wrap(optics.CautionText(), chars-4)
+	for _, line := range optics.PowerLevels(r) {
+		caution = append(caution, wrap(line, chars-4)...)
+	}
 	h := y
 	if len(posts) > 0 {
 		h += planLineMM*float64(len(posts)+1) + 4

@@ -110,6 +110,7 @@ type Result struct {
 	Numbers  Numbers
 	Problem  string    // set when nothing could be computed
 	Arms     []ArmLink // the arms the side view may show; none for a bench with one
+	Power    []string  // the power levels the bench reaches, for the cautions (optics.PowerLevels)
 }
 
 // Links are the addresses of one revision's pages and exports.

@@ -72,6 +72,7 @@ func NewResult(r *optics.Report, o DrawOptions) Result {
 		TableSVG: InlineSVG(diagram.Table(r, o.Table())),
 		Numbers:  NumbersPanel(r),
 		Arms:     armLinks(r, o.Arm),
+		Power:    optics.PowerLevels(r),
 	}
 }
 
