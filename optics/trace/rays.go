@@ -74,10 +74,7 @@ func Rays(b *optics.Bench, p *optics.Path) []RaySpec {
 		for k, wl := range p.WavelengthsNM {
 			ws := strconv.FormatFloat(wl, 'g', -1, 64)
 			for j := range n {
-				pupil := 0.0
-				if n > 1 {
-					pupil = -1 + 2*float64(j)/float64(n-1)
-				}
+				pupil := fanPupil(j, n)
 				spec := RaySpec{
 					Name:  fmt.Sprintf("fan %s%s %snm %0*d", fs, fieldUnit, ws, digits, j),
 					K:     k,
@@ -99,4 +96,15 @@ func Rays(b *optics.Bench, p *optics.Path) []RaySpec {
 		}
 	}
 	return specs
+}
+
+// fanPupil is ray j's pupil coordinate in a fan of n rays from -1 to 1, 0 for a single ray. It is
+// (2j - (n-1))/(n-1): the numerator is an exact integer, so rays j and n-1-j get coordinates of
+// exactly opposite sign and a symmetric fan stays symmetric to the last bit (-1 + 2j/(n-1) rounds
+// differently on the two sides and clipped a round-number fan unevenly).
+func fanPupil(j, n int) float64 {
+	if n <= 1 {
+		return 0
+	}
+	return float64(2*j-(n-1)) / float64(n-1)
 }
