@@ -25,6 +25,8 @@ const (
 	WarnOpenPort            WarningCode = "open-port"
 	WarnMissesPart          WarningCode = "misses-part"
 	WarnImageRotated        WarningCode = "image-rotated"
+	// Mid-path dumps (README, element type dump):
+	WarnAfterDump WarningCode = "after-dump"
 )
 
 // WarningCodes is every code with what it means, in the order the README lists them.
@@ -51,6 +53,7 @@ var WarningCodes = []struct {
 	{WarnOpenPort, "a splitter's port sends light that no element takes and that joins no other beam: a stray beam; the message gives its share of the source's power"},
 	{WarnMissesPart, "a same_as pass arrives more than 0.5 mm from its part, on the table or in height; `others` names the part"},
 	{WarnImageRotated, "a periscope turns the beam by an angle that is not a multiple of 90°: the image is rotated, the exact trace is right, the paraxial and beam values downstream are in the rotated planes"},
+	{WarnAfterDump, "the element lies after a dump on its path: no light reaches it (rays, beam and drawings end at the dump); `others` names the dump"},
 }
 
 // Meaning says what the code means; "" for a code that is not in WarningCodes.

@@ -91,6 +91,7 @@ func linear(b *optics.Bench, main, plan bool) *optics.Report {
 	r.Board = layout.NewBoard(b.Table, b.Source, r)
 	r.Warnings = append(r.Warnings, planWarnings...)
 	r.Warnings = append(r.Warnings, screenWarnings(b, r)...)
+	r.Warnings = append(r.Warnings, afterDumpWarnings(b)...)
 	r.Blur = blurs(b, r)
 	return r
 }

@@ -11,7 +11,7 @@ import (
 // OutputWaist is where the beam leaving one surface has its waist and how long that waist is, in
 // one plane at the primary wavelength.
 type OutputWaist struct {
-	AfterMM   float64 // signed distance along the path from the surface to the waist (negative: a virtual waist upstream)
+	AfterMM    float64 // signed distance along the path from the surface to the waist (negative: a virtual waist upstream)
 	RayleighMM float64 // the Rayleigh range π w0²/(M² λ) in the medium the beam leaves into (n·Im q̂)
 }
 

@@ -65,6 +65,7 @@ func Propagate(b *optics.Bench, p *optics.Path) (*optics.BeamReport, []optics.Wa
 			return nil, []optics.Warning{{Code: CodeBeamInvalid, Element: p.Surfaces[i].ID, Message: "the path has no index for this surface; the beam was not computed"}}
 		}
 	}
+	p = litPath(p)
 	lam := p.WavelengthsNM[0]
 	g := newGaussian(lam, m2)
 	q0 := g.sourceQ(bm.WaistRadiusMM, bm.WaistAtMM)
