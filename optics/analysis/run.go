@@ -75,7 +75,7 @@ func linear(b *optics.Bench, main, plan bool) *optics.Report {
 	r.Elements = layout.Walk(b)
 	fillElements(r.Elements, b, p, tan)
 	var rayWarnings []optics.Warning
-	r.Rays, rayWarnings = traceRays(b, p, r.Elements)
+	r.Rays, rayWarnings = traceRays(b, p, r.Elements, tan)
 	r.Warnings = append(r.Warnings, rayWarnings...)
 
 	var beamWarnings []optics.Warning

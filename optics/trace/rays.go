@@ -31,6 +31,25 @@ type RaySpec struct {
 // the object point (0, h, 0) at angles pupil·asin(NA) in the table plane; its paraxial twin has
 // slope pupil·NA, so the marginal ray has u = NA.
 func Rays(b *optics.Bench, p *optics.Path) []RaySpec {
+	return AimedRays(b, p, Aim{})
+}
+
+// Aim is where the fans of an off-axis field are centred, per unit of field (tan of the field
+// angle for a collimated source, the object height in mm for a point source): the paraxial chief
+// ray's start, which passes through the centre of the aperture stop. The zero Aim centres every
+// fan on the axis at the source plane (collimated) or on the axis direction (point), which is the
+// chief ray when the source itself is the stop.
+type Aim struct {
+	YPerField float64 // a collimated fan's centre height at the source plane, mm per unit tan(angle)
+	UPerField float64 // a point fan's centre slope dy/dz, per mm of object height
+}
+
+// AimedRays is Rays with the off-axis fans centred on the chief ray through the aperture stop
+// (README, Report, Rays), so that their blur and the system values describe the same bundle: a
+// collimated fan at field angle a spans heights tan(a)·YPerField + pupil·semi_diameter; a point
+// fan from height h spans angles atan(h·UPerField) + pupil·asin(NA), its paraxial twin the slopes
+// h·UPerField + pupil·NA.
+func AimedRays(b *optics.Bench, p *optics.Path, aim Aim) []RaySpec {
 	src := &b.Source
 	n := src.FanRayCount()
 	if n < 0 {
@@ -82,12 +101,13 @@ func Rays(b *optics.Bench, p *optics.Path) []RaySpec {
 					Pupil: pupil,
 				}
 				if point {
-					theta := pupil * math.Asin(math.Min(na, 1))
+					centre := f * aim.UPerField
+					theta := math.Atan(centre) + pupil*math.Asin(math.Min(na, 1))
 					spec.Start = Start{Pos: r3.Vec{X: 0, Y: f, Z: 0}, Dir: r3.Vec{X: 0, Y: math.Sin(theta), Z: math.Cos(theta)}}
-					spec.ParaxialY, spec.ParaxialU = f, pupil*na
+					spec.ParaxialY, spec.ParaxialU = f, centre+pupil*na
 				} else {
 					u := math.Tan(f * math.Pi / 180)
-					y := pupil * semi
+					y := u*aim.YPerField + pupil*semi
 					spec.Start = Start{Pos: r3.Vec{X: 0, Y: y, Z: 0}, Dir: unit(r3.Vec{X: 0, Y: u, Z: 1})}
 					spec.ParaxialY, spec.ParaxialU = y, u
 				}
