@@ -264,6 +264,8 @@ const (
 	SpacingDepthOfFocus     = "depth-of-focus"    // the image must stay within the depth of focus
 	SpacingDiffractionAngle = "diffraction-angle" // the output must stay collimated to its diffraction angle
 	SpacingNone             = "none"              // no lens, thin lens or mirror: no gap changes the light
+	// Spacing tolerances from the beam (README, Report, spacing):
+	SpacingBeamRayleigh = "beam-rayleigh" // the output beam's waist must stay within its Rayleigh range of where it was
 )
 
 // SpacingTolerance is how one gap (element ID's gap_mm, from the previous element or the source)
@@ -291,6 +293,9 @@ type SpacingTolerance struct {
 	DefocusPerMM    *float64 `json:"defocus_per_mm"`
 	DivergencePerMM *float64 `json:"divergence_per_mm"` // rad per mm of gap
 	ToleranceMM     *float64 `json:"tolerance_mm"`
+	// Spacing tolerances from the beam (kind "beam-rayleigh"): d(z_waist - z_ref)/d gap, z_waist
+	// the output beam's waist along the path; ToleranceMM is then rayleigh_mm / |WaistShiftPerMM|.
+	WaistShiftPerMM *float64 `json:"waist_shift_per_mm"`
 }
 
 // SpacingBasis is the allowance the spacing tolerances are measured against, so that the table
@@ -311,6 +316,11 @@ type SpacingBasis struct {
 	ImageNA        *float64 `json:"image_na"`
 	DivergenceRad  *float64 `json:"divergence_rad"`   // λ/(π·w); null for a finite image
 	OutputRadiusMM *float64 `json:"output_radius_mm"` // w
+	// Spacing tolerances from the beam (kind "beam-rayleigh"; null otherwise): the Rayleigh range
+	// of the beam leaving the last optical vertex, and where its waist lies relative to the
+	// reference element (positive downstream).
+	RayleighMM           *float64 `json:"rayleigh_mm"`
+	WaistFromReferenceMM *float64 `json:"waist_from_reference_mm"`
 }
 
 // Blur is how widely one fan of exact rays lands on a screen: the RMS distance of the hits from

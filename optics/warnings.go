@@ -30,6 +30,8 @@ const (
 	WarnGlassCodePoor WarningCode = "glass-code-poor"
 	WarnMirrorLeak    WarningCode = "mirror-leak"
 	WarnDamageRisk    WarningCode = "damage-risk"
+	// Mid-path dumps (README, element type dump):
+	WarnAfterDump WarningCode = "after-dump"
 )
 
 // WarningCodes is every code with what it means, in the order the README lists them.
@@ -60,6 +62,7 @@ var WarningCodes = []struct {
 	{WarnGlassCodePoor, "a medium given by nd and vd (a glass code) is used where the two-term model errs by more than 1e-3 in index (measured: flints below 470 nm, dense flints above 740 nm, every glass above 870 nm); give a Sellmeier fit"},
 	{WarnMirrorLeak, "a mirror lets the part of the power it does not reflect through as a stray beam; given when the source states a power, the message gives it in mW"},
 	{WarnDamageRisk, "the beam's peak irradiance or fluence on an element reaches half its damage_w_cm2 or damage_j_cm2 (common practice)"},
+	{WarnAfterDump, "the element lies after a dump on its path: no light reaches it (rays, beam and drawings end at the dump); `others` names the dump"},
 }
 
 // Meaning says what the code means; "" for a code that is not in WarningCodes.

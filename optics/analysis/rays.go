@@ -14,8 +14,8 @@ import (
 // traceRays traces the explicit rays and the fans exactly, pairs every hit with the paraxial twin
 // of the ray, records the largest ray height at each element, and summarises rays that stopped
 // early as warnings, one per element and status.
-func traceRays(b *optics.Bench, p *optics.Path, places []optics.ElementPlace) ([]optics.Ray, []optics.Warning) {
-	specs := trace.Rays(b, p)
+func traceRays(b *optics.Bench, p *optics.Path, places []optics.ElementPlace, tan paraxial.Result) ([]optics.Ray, []optics.Warning) {
+	specs := trace.AimedRays(b, p, fanAim(b, tan))
 	buf := make([]trace.Point, 0, len(p.Surfaces))
 	twin := make([]paraxial.Ray, len(p.Surfaces))
 	rays := make([]optics.Ray, 0, len(specs))
@@ -105,3 +105,21 @@ func vec(v r3.Vec) [3]float64 { return [3]float64{v.X, v.Y, v.Z} }
 
 // num formats a length compactly: 25.4, 0.04, 150.
 var num = numfmt.Brief.Format
+
+// fanAim centres the off-axis fans on the paraxial chief ray of the primary wavelength in the
+// table plane, which passes through the centre of the aperture stop (paraxial.Analyze): the chief
+// ray is linear in the field, so its start for the largest field, divided by that field, serves
+// every field.
+func fanAim(b *optics.Bench, tan paraxial.Result) trace.Aim {
+	c := tan.ChiefStart
+	if b.Source.Kind == optics.SourcePoint {
+		if c.Y != 0 {
+			return trace.Aim{UPerField: c.NU / c.Y}
+		}
+		return trace.Aim{}
+	}
+	if c.NU != 0 {
+		return trace.Aim{YPerField: c.Y / c.NU}
+	}
+	return trace.Aim{}
+}

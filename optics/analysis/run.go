@@ -76,7 +76,7 @@ func linear(b *optics.Bench, main, plan bool) *optics.Report {
 	r.Elements = layout.Walk(b)
 	fillElements(r.Elements, b, p, tan)
 	var rayWarnings []optics.Warning
-	r.Rays, rayWarnings = traceRays(b, p, r.Elements)
+	r.Rays, rayWarnings = traceRays(b, p, r.Elements, tan)
 	r.Warnings = append(r.Warnings, rayWarnings...)
 
 	var beamWarnings []optics.Warning
@@ -95,6 +95,7 @@ func linear(b *optics.Bench, main, plan bool) *optics.Report {
 	r.Board = layout.NewBoard(b.Table, b.Source, r)
 	r.Warnings = append(r.Warnings, planWarnings...)
 	r.Warnings = append(r.Warnings, screenWarnings(b, r)...)
+	r.Warnings = append(r.Warnings, afterDumpWarnings(b)...)
 	r.Blur = blurs(b, r)
 	return r
 }

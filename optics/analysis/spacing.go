@@ -5,6 +5,7 @@ import (
 	"slices"
 
 	"raytable/optics"
+	"raytable/optics/beam"
 	"raytable/optics/paraxial"
 )
 
@@ -64,6 +65,10 @@ func SpacingTolerances(b *optics.Bench, p *optics.Path, tan paraxial.Result) ([]
 		s.slopeScale = slopeTermBound(p, tan.Marginal)
 	}
 
+	// With a Gaussian beam the allowance is the output beam's own Rayleigh range (see
+	// beamBasis); the geometric sensitivities are still reported beside it.
+	zR := s.beamBasis(b, p, &basis)
+
 	work := *p
 	work.Surfaces = slices.Clone(p.Surfaces)
 	shift := func(from int, d float64) {
@@ -95,6 +100,13 @@ func SpacingTolerances(b *optics.Bench, p *optics.Path, tan paraxial.Result) ([]
 			sensitivity = centralDifference(plus.slope, minus.slope, s.slopeScale)
 			row.DivergencePerMM = ptr(sensitivity)
 		}
+		if zR > 0 {
+			sensitivity, allowance = 0, zR
+			if plus.waisted && minus.waisted {
+				sensitivity = centralDifference(plus.zWaist-plus.zRef, minus.zWaist-minus.zRef, math.Max(plus.scale, minus.scale))
+				row.WaistShiftPerMM = ptr(sensitivity)
+			}
+		}
 		if sensitivity != 0 && allowance > 0 {
 			if tol := allowance / math.Abs(sensitivity); tol <= optics.MaxLengthMM {
 				row.ToleranceMM = ptr(tol)
@@ -103,6 +115,30 @@ func SpacingTolerances(b *optics.Bench, p *optics.Path, tan paraxial.Result) ([]
 		rows = append(rows, row)
 	}
 	return rows, basis
+}
+
+// beamBasis sets the tolerances' allowance from the source's Gaussian beam, when it has one that
+// can be followed to the last optical vertex: every gap is then held to the change that moves the
+// output beam's waist by its own Rayleigh range relative to the reference element (README, Report,
+// spacing). One rule serves a waist on a screen (the waist leaves the screen by its depth of
+// focus) and a collimated output (its waist, near or far, moves by its own length, the
+// divergence-free stretch of the beam), and it is smooth in every gap: waist position and
+// Rayleigh range are smooth functions of q, which has no jump as the output passes through
+// collimation, unlike the geometric image distance. It returns the Rayleigh range (0: no beam,
+// the geometric basis stands) and arms s to measure the waist on every changed path.
+//
+// A fibre or mode target as the reference element is measured the same way: the beam's waist
+// against the element it is looked at (referenceElement).
+func (s *spacingProbe) beamBasis(b *optics.Bench, p *optics.Path, basis *optics.SpacingBasis) float64 {
+	w, ok := beam.WaistAfter(b, p, s.last, paraxial.Tangential)
+	if !ok || !(w.RayleighMM > 0) {
+		return 0
+	}
+	basis.Kind = optics.SpacingBeamRayleigh
+	basis.RayleighMM = ptr(w.RayleighMM)
+	basis.WaistFromReferenceMM = ptr(p.Surfaces[s.last].PathMM + w.AfterMM - p.Surfaces[p.Spans[s.ref].First].PathMM)
+	s.bench = b
+	return w.RayleighMM
 }
 
 // referenceElement is the element the output is looked at: the first that stops rays (a dump),
@@ -124,6 +160,7 @@ type spacingProbe struct {
 	start      paraxial.Ray
 	slopeScale float64
 	trace      []paraxial.Ray // reused by every trace
+	bench      *optics.Bench  // set when the tolerances come from the beam
 }
 
 // spacingSample is what one changed bench gives.
@@ -132,10 +169,21 @@ type spacingSample struct {
 	zImage float64 // image position along the path
 	zRef   float64 // reference element's position along the path
 	slope  float64 // output marginal ray slope dy/dz
+
+	waisted bool    // the beam could be followed to the last optical vertex
+	zWaist  float64 // the output beam's waist position along the path
+	scale   float64 // the size of zWaist and zRef, against which rounding is told
 }
 
 func (s *spacingProbe) measure(p *optics.Path) spacingSample {
 	out := spacingSample{zRef: p.Surfaces[p.Spans[s.ref].First].PathMM}
+	if s.bench != nil {
+		if w, ok := beam.WaistAfter(s.bench, p, s.last, paraxial.Tangential); ok {
+			zLast := p.Surfaces[s.last].PathMM
+			out.waisted, out.zWaist = true, zLast+w.AfterMM
+			out.scale = math.Max(math.Abs(zLast)+math.Abs(w.AfterMM)+w.RayleighMM, math.Abs(out.zRef))
+		}
+	}
 	if s.focus {
 		c := paraxial.Cardinals(p, 0, paraxial.Tangential, s.src)
 		if c.ImageDistanceMM != nil {

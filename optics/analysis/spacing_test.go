@@ -213,10 +213,18 @@ func TestSpacingDemo(t *testing.T) {
 	if !reflect.DeepEqual(ids, want) {
 		t.Fatalf("rows %v, want one per element %v", ids, want)
 	}
-	if r.SpacingBasis.Kind != optics.SpacingDepthOfFocus || r.SpacingBasis.Reference != "CAM" {
-		t.Fatalf("basis %+v, want depth of focus at CAM", r.SpacingBasis)
+	// The demo's source has a Gaussian beam: the tolerances come from it (README, Report, spacing).
+	if r.SpacingBasis.Kind != optics.SpacingBeamRayleigh || r.SpacingBasis.Reference != "CAM" {
+		t.Fatalf("basis %+v, want beam-rayleigh at CAM", r.SpacingBasis)
 	}
-	// The basis agrees with the system's own NA (self-consistency).
+	// The gaps past F1 move only the camera against the waist: -1 per mm, so they are held to the
+	// output waist's Rayleigh range (the definition).
+	zR := value(t, "spacing_basis.rayleigh_mm", r.SpacingBasis.RayleighMM)
+	for _, id := range []string{"M2", "CAM"} {
+		approx.CheckPtr(t, id+" waist_shift_per_mm", rowOf(t, r, id).WaistShiftPerMM, -1, derivClose)
+		approx.CheckPtr(t, id+" tolerance_mm", rowOf(t, r, id).ToleranceMM, zR, derivClose)
+	}
+	// The geometric depth of focus is still given beside it, and agrees with the system's own NA (self-consistency).
 	na := value(t, "system.image_na", r.System.ImageNA)
 	approx.CheckPtr(t, "depth_of_focus_mm", r.SpacingBasis.DepthOfFocusMM, lambdaHeNeMM/(2*na*na), approx.VeryClose)
 	for _, id := range []string{"M2", "CAM"} {

@@ -64,6 +64,7 @@ func propagate(b *optics.Bench, p *optics.Path) (*optics.BeamReport, []optics.Wa
 	if b == nil || p == nil || b.Source.GaussianBeam() == nil {
 		return nil, nil, nil
 	}
+	p = litPath(p) // nothing passes a dump: the beam ends at the first one
 	t, s, warn := sourceTraces(b, p)
 	if warn != nil {
 		return nil, []optics.Warning{*warn}, nil

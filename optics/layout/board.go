@@ -22,7 +22,7 @@ func NewBoard(t optics.Table, s optics.Source, r *optics.Report) *optics.Board {
 	fp := newFoldedPath(s, r.Elements)
 	b.Path, b.TailDir, b.SourceDir = fp.nodes, fp.tailDir, fp.dir(0)
 	if r.Beam != nil {
-		b.Band = fp.bands(r.Beam.Samples)
+		b.Band = fp.bands(r.DrawnSamples()) // nothing is drawn past the screen or dump the path ends on
 	}
 	b.Elements = make([]optics.BoardElement, len(r.Elements))
 	for i, e := range r.Elements {

@@ -39,8 +39,9 @@ const stopMargin = 1e-12
 //
 // The stop is the surface whose clear aperture most limits a ray from the axial source point: the
 // largest ratio |y|/semi-aperture of the source's full axial ray (height semi_diameter_mm for a
-// collimated source, slope na for a point source), provided it exceeds 1; otherwise the source
-// itself. Surfaces after a dump receive no light and are not candidates.
+// collimated source; for a point source the slope tan(asin na) of the exact cone's edge, so that
+// the paraxial and the exact trace agree on the stop), provided it exceeds 1; otherwise the
+// source itself, with a marginal ray of slope na. Surfaces after a dump receive no light and are not candidates.
 //
 // The pupils are where the chief ray, extended in object space and in image space, crosses the
 // axis: by construction those are the images of the stop centre through what precedes and what
@@ -61,18 +62,24 @@ func Analyze(b *optics.Bench, p *optics.Path, k int, plane Plane) Result {
 	if !point && src.SemiDiameterMM != nil {
 		axial.Y = *src.SemiDiameterMM
 	}
-	if point && src.ConeNA(p.WavelengthsNM[0]) > 0 {
-		axial.NU = src.ConeNA(p.WavelengthsNM[0])
+	// The stop is searched with the ray the exact cone's edge follows: a point source's cone of
+	// numerical aperture NA leaves at the angle asin(NA), whose slope is tan(asin NA), larger
+	// than NA (trace.Rays). Searching with u = NA would call the source the stop at NA 0.4 while a
+	// lens clips the exact rays. When the source stays the stop the marginal ray keeps u = NA,
+	// the paraxial convention; when a surface is the stop the marginal ray fills it.
+	search := axial
+	if na := src.ConeNA(p.WavelengthsNM[0]); point && na > 0 {
+		axial.NU = na
+		search.NU = ConeSlope(na)
 	}
-	axialTrace := Trace(p, k, plane, axial)
+	axialTrace := Trace(p, k, plane, search)
 	stop, ratio := limitingSurface(p, axialTrace, plane)
-	scale := 1.0
+	res.MarginalStart = axial
 	if stop >= 0 && ratio > 1+stopMargin {
 		res.StopSurface = stop
 		res.Values.ApertureStop = p.Surfaces[stop].ID
-		scale = 1 / ratio
+		res.MarginalStart = Ray{Y: search.Y / ratio, NU: search.NU / ratio}
 	}
-	res.MarginalStart = Ray{Y: axial.Y * scale, NU: axial.NU * scale}
 	res.Marginal = Trace(p, k, plane, res.MarginalStart)
 
 	field := largestField(src)
@@ -120,6 +127,16 @@ func Analyze(b *optics.Bench, p *optics.Path, k int, plane Plane) Result {
 		}
 	}
 	return res
+}
+
+// ConeSlope is the slope dy/dz of the edge of a cone of numerical aperture na in air,
+// tan(asin na); na of 1 or more is a hemisphere, given the slope of a ray at 89.9° so that stop
+// searches stay finite.
+func ConeSlope(na float64) float64 {
+	if na >= 1 {
+		return math.Tan(89.9 * math.Pi / 180)
+	}
+	return na / math.Sqrt(1-na*na)
 }
 
 // limitingSurface returns the surface where the axial ray fills the largest fraction of the

@@ -82,6 +82,16 @@ func spacingSection(ss []optics.SpacingTolerance, b optics.SpacingBasis) Section
 			return []Cell{opt(s.DivergencePerMM, SmallAngle, Undefined)}
 		}
 		sec.Note.Words.Page = "The output is collimated. Each gap changed alone, everything after it moving along. The tolerance keeps the output divergence within the beam's own diffraction angle, %[2]s µrad = λ/(π·w) for an output radius w of %[3]s mm. " + notCritical
+	case optics.SpacingBeamRayleigh:
+		args = []Cell{val(b.WavelengthNM), optVal(b.RayleighMM), say(b.Reference), optVal(b.WaistFromReferenceMM)}
+		sec.Title.Words.Text = "SPACING at %[1]s nm: from the beam: output waist %[4]s mm from %[3]s, Rayleigh range %[2]s mm"
+		sec.Columns = []Column{id, gap,
+			{Head: Words{Page: "waist moves against " + b.Reference, Text: "waist shift"}, Unit: MMPerMM, In: Text | Page},
+			tolerance}
+		middle = func(s optics.SpacingTolerance) []Cell {
+			return []Cell{optVal(s.WaistShiftPerMM)}
+		}
+		sec.Note.Words.Page = "From the Gaussian beam. Each gap changed alone, everything after it moving along. The tolerance keeps the output beam's waist within its own Rayleigh range, %[2]s mm, of where it lies now (%[4]s mm from %[3]s). " + notCritical
 	default:
 		// Kind none comes with no rows; any others are only paired on the compare page.
 		shown = Compare

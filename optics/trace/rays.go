@@ -31,6 +31,25 @@ type RaySpec struct {
 // the object point (0, h, 0) at angles pupil·asin(NA) in the table plane; its paraxial twin has
 // slope pupil·NA, so the marginal ray has u = NA.
 func Rays(b *optics.Bench, p *optics.Path) []RaySpec {
+	return AimedRays(b, p, Aim{})
+}
+
+// Aim is where the fans of an off-axis field are centred, per unit of field (tan of the field
+// angle for a collimated source, the object height in mm for a point source): the paraxial chief
+// ray's start, which passes through the centre of the aperture stop. The zero Aim centres every
+// fan on the axis at the source plane (collimated) or on the axis direction (point), which is the
+// chief ray when the source itself is the stop.
+type Aim struct {
+	YPerField float64 // a collimated fan's centre height at the source plane, mm per unit tan(angle)
+	UPerField float64 // a point fan's centre slope dy/dz, per mm of object height
+}
+
+// AimedRays is Rays with the off-axis fans centred on the chief ray through the aperture stop
+// (README, Report, Rays), so that their blur and the system values describe the same bundle: a
+// collimated fan at field angle a spans heights tan(a)·YPerField + pupil·semi_diameter; a point
+// fan from height h spans angles atan(h·UPerField) + pupil·asin(NA), its paraxial twin the slopes
+// h·UPerField + pupil·NA.
+func AimedRays(b *optics.Bench, p *optics.Path, aim Aim) []RaySpec {
 	src := &b.Source
 	n := src.FanRayCount()
 	if n < 0 {
@@ -74,10 +93,7 @@ func Rays(b *optics.Bench, p *optics.Path) []RaySpec {
 		for k, wl := range p.WavelengthsNM {
 			ws := strconv.FormatFloat(wl, 'g', -1, 64)
 			for j := range n {
-				pupil := 0.0
-				if n > 1 {
-					pupil = -1 + 2*float64(j)/float64(n-1)
-				}
+				pupil := fanPupil(j, n)
 				spec := RaySpec{
 					Name:  fmt.Sprintf("fan %s%s %snm %0*d", fs, fieldUnit, ws, digits, j),
 					K:     k,
@@ -85,12 +101,13 @@ func Rays(b *optics.Bench, p *optics.Path) []RaySpec {
 					Pupil: pupil,
 				}
 				if point {
-					theta := pupil * math.Asin(math.Min(na, 1))
+					centre := f * aim.UPerField
+					theta := math.Atan(centre) + pupil*math.Asin(math.Min(na, 1))
 					spec.Start = Start{Pos: r3.Vec{X: 0, Y: f, Z: 0}, Dir: r3.Vec{X: 0, Y: math.Sin(theta), Z: math.Cos(theta)}}
-					spec.ParaxialY, spec.ParaxialU = f, pupil*na
+					spec.ParaxialY, spec.ParaxialU = f, centre+pupil*na
 				} else {
 					u := math.Tan(f * math.Pi / 180)
-					y := pupil * semi
+					y := u*aim.YPerField + pupil*semi
 					spec.Start = Start{Pos: r3.Vec{X: 0, Y: y, Z: 0}, Dir: unit(r3.Vec{X: 0, Y: u, Z: 1})}
 					spec.ParaxialY, spec.ParaxialU = y, u
 				}
@@ -99,4 +116,15 @@ func Rays(b *optics.Bench, p *optics.Path) []RaySpec {
 		}
 	}
 	return specs
+}
+
+// fanPupil is ray j's pupil coordinate in a fan of n rays from -1 to 1, 0 for a single ray. It is
+// (2j - (n-1))/(n-1): the numerator is an exact integer, so rays j and n-1-j get coordinates of
+// exactly opposite sign and a symmetric fan stays symmetric to the last bit (-1 + 2j/(n-1) rounds
+// differently on the two sides and clipped a round-number fan unevenly).
+func fanPupil(j, n int) float64 {
+	if n <= 1 {
+		return 0
+	}
+	return float64(2*j-(n-1)) / float64(n-1)
 }

@@ -66,10 +66,8 @@ func PathLengthMM(r *optics.Report) float64 {
 			}
 		}
 	}
-	if r.Beam != nil {
-		for _, s := range r.Beam.Samples {
-			z = maxFinite(z, s.PathMM)
-		}
+	for _, s := range r.DrawnSamples() {
+		z = maxFinite(z, s.PathMM)
 	}
 	if z <= 0 {
 		return 100
@@ -158,10 +156,8 @@ func contentHeightMM(r *optics.Report) float64 {
 			y = maxFinite(y, math.Abs(h.Exact.YMM))
 		}
 	}
-	if r.Beam != nil {
-		for _, s := range r.Beam.Samples {
-			y = maxFinite(y, s.WTMM)
-		}
+	for _, s := range r.DrawnSamples() {
+		y = maxFinite(y, s.WTMM)
 	}
 	if y <= 0 {
 		return 1

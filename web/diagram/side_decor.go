@@ -54,12 +54,12 @@ func drawSideLegend(p *pen, f *sideFrame, r *optics.Report, paraxial bool, stops
 			p.line(x, y, x+18, y, `stroke="#444444"`, `stroke-width="1"`, `stroke-dasharray="4 3"`)
 		})
 	}
-	if r.Beam != nil && len(r.Beam.Samples) >= 2 {
+	if samples := r.DrawnSamples(); len(samples) >= 2 {
 		c := WavelengthColor(r.Beam.WavelengthNM)
 		item("beam 1/e² radius", func(x float64) {
 			p.rect(x, y-5, 18, 10, attr("fill", c), `fill-opacity="0.22"`, attr("stroke", c), `stroke-width="0.6"`)
 		})
-		if sagittalDiffers(r.Beam) {
+		if sagittalDiffers(samples) {
 			item("across the table", func(x float64) {
 				p.line(x, y, x+18, y, attr("stroke", c), `stroke-width="0.9"`, `stroke-dasharray="3 2"`)
 			})

@@ -239,24 +239,25 @@ func textWidthPX(s string, size float64) float64 {
 
 // drawBeamBand draws the Gaussian 1/e² envelope (tangential radius) as a translucent band.
 func drawBeamBand(p *pen, f *sideFrame, r *optics.Report) {
-	if r.Beam == nil || len(r.Beam.Samples) < 2 {
+	samples := r.DrawnSamples()
+	if len(samples) < 2 {
 		return
 	}
 	var xs, ys []float64
-	for _, s := range r.Beam.Samples {
+	for _, s := range samples {
 		if finite(s.PathMM, s.WTMM) {
 			xs, ys = append(xs, f.x(s.PathMM)), append(ys, f.y(s.WTMM))
 		}
 	}
-	for i := len(r.Beam.Samples) - 1; i >= 0; i-- {
-		s := r.Beam.Samples[i]
+	for i := len(samples) - 1; i >= 0; i-- {
+		s := samples[i]
 		if finite(s.PathMM, s.WTMM) {
 			xs, ys = append(xs, f.x(s.PathMM)), append(ys, f.y(-s.WTMM))
 		}
 	}
 	c := WavelengthColor(r.Beam.WavelengthNM)
 	p.polygon(xs, ys, `class="beam"`, attr("fill", c), `fill-opacity="0.22"`, attr("stroke", c), `stroke-opacity="0.6"`, `stroke-width="0.6"`)
-	if !sagittalDiffers(r.Beam) {
+	if !sagittalDiffers(samples) {
 		return
 	}
 	// Across the table the beam has its own radius wherever a tilted curved mirror made the two
@@ -264,7 +265,7 @@ func drawBeamBand(p *pen, f *sideFrame, r *optics.Report) {
 	p.group(`class="beam-sagittal"`, `fill="none"`, attr("stroke", c), `stroke-width="0.9"`, `stroke-dasharray="3 2"`)
 	for _, sign := range []float64{1, -1} {
 		xs, ys = xs[:0], ys[:0]
-		for _, s := range r.Beam.Samples {
+		for _, s := range samples {
 			if finite(s.PathMM, s.WSMM) {
 				xs, ys = append(xs, f.x(s.PathMM)), append(ys, f.y(sign*s.WSMM))
 			}
@@ -276,8 +277,8 @@ func drawBeamBand(p *pen, f *sideFrame, r *optics.Report) {
 
 // sagittalDiffers reports whether the beam's radius across the table differs anywhere from its
 // radius in the table plane by more than 1 %, enough to show at drawing scale.
-func sagittalDiffers(b *optics.BeamReport) bool {
-	for _, s := range b.Samples {
+func sagittalDiffers(samples []optics.BeamSample) bool {
+	for _, s := range samples {
 		if finite(s.WTMM, s.WSMM) && math.Abs(s.WSMM-s.WTMM) > 0.01*math.Max(s.WTMM, s.WSMM) {
 			return true
 		}

@@ -71,10 +71,12 @@ func rayPoints(f *sideFrame, faces faceIndex, ray *optics.Ray) (xs, ys []float64
 	return xs, ys
 }
 
-// runsOn reports whether a ray leaves the last element it met and goes on.
+// runsOn reports whether a ray leaves the last element it met and goes on to be drawn: not after
+// a dump, nor after the screen or target the path ends on (optics.Kind.EndsPath; a ray that ran
+// through a screen mid-path has later hits), where the drawings stop.
 func runsOn(ray *optics.Ray, lastType string) bool {
 	k, known := optics.KindOf(lastType)
-	return ray.Status == optics.RayOK && ray.StoppedAt == "" && !(known && k.StopsRays)
+	return ray.Status == optics.RayOK && ray.StoppedAt == "" && !(known && (k.StopsRays || k.EndsPath))
 }
 
 // paraxialPoints returns the paraxial twin: the start, then the paraxial height at each face

@@ -78,12 +78,17 @@ func TestSideRayPointsFollowReport(t *testing.T) {
 
 func TestSideRunOut(t *testing.T) {
 	// A ray that runs through ends a run-out past its last hit along its last direction; one that
-	// ends at a dump does not.
+	// ends at a dump, or at the screen the path ends on, does not (README, The web page: the
+	// drawings stop where the light does).
 	r := fixtureReport()
-	r.Elements = r.Elements[:5] // drop the dump: the screen is last and rays run on
+	r.Elements = r.Elements[:5] // drop the dump: the screen is last
 	ray := fixtureRay("through", 632.8, 1, optics.RayOK, "SC", "")
 	ray.StoppedAt = ""
 	f := newSideFrame(r, SideOptions{})
+	if xs, _ := rayPoints(f, newFaceIndex(r), &ray); len(xs) != len(ray.Hits)+1 {
+		t.Errorf("a ray ending on the last screen has %d points, want start + hits = %d", len(xs), len(ray.Hits)+1)
+	}
+	r.Elements[4].Type = optics.TypeAperture // an open end: the beam runs on past it
 	xs, ys := rayPoints(f, newFaceIndex(r), &ray)
 	if len(xs) != len(ray.Hits)+2 {
 		t.Fatalf("points = %d, want start + %d hits + run-out", len(xs), len(ray.Hits))

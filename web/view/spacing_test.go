@@ -88,7 +88,8 @@ func TestNumbersPanelShowsSpacing(t *testing.T) {
 	if strings.Join(marked, ",") != "PH,L2" {
 		t.Errorf("marked rows %v, want PH,L2", marked)
 	}
-	if note := textOf(table.Parent); !strings.Contains(note, "depth of focus ± "+numfmt.Panel.Format(*r.SpacingBasis.DepthOfFocusMM)+" mm at CAM") {
-		t.Errorf("the spacing note does not give the depth of focus %s mm at CAM", numfmt.Panel.Format(*r.SpacingBasis.DepthOfFocusMM))
+	// The demo has a beam: the note gives the output waist's Rayleigh range (README, Report, spacing).
+	if note := textOf(table.Parent); !strings.Contains(note, "Rayleigh range, "+numfmt.Panel.Format(*r.SpacingBasis.RayleighMM)+" mm") {
+		t.Errorf("the spacing note does not give the Rayleigh range %s mm", numfmt.Panel.Format(*r.SpacingBasis.RayleighMM))
 	}
 }
