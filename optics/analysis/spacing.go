@@ -108,7 +108,7 @@ func SpacingTolerances(b *optics.Bench, p *optics.Path, tan paraxial.Result) ([]
 			}
 		}
 		if sensitivity != 0 && allowance > 0 {
-			if tol := allowance / math.Abs(sensitivity); tol <= optics.MaxLengthMM {
+			if tol := allowance / math.Abs(sensitivity); tol <= longestGapChangeMM(b) {
 				row.ToleranceMM = ptr(tol)
 			}
 		}
@@ -217,4 +217,14 @@ func slopeTermBound(p *optics.Path, marginal []paraxial.Ray) float64 {
 		sum += math.Abs(paraxial.Power(&p.Surfaces[i], p.IndexBefore(i, 0), p.Surfaces[i].Index[0], paraxial.Tangential) * marginal[i].Y)
 	}
 	return sum
+}
+
+// longestGapChangeMM is the largest gap error a tolerance is stated for: a spacing on the table
+// cannot be off by more than the table's diagonal, so a longer tolerance means the gap does not
+// matter (null, shown as "-"); without a table size the bound is MaxLengthMM.
+func longestGapChangeMM(b *optics.Bench) float64 {
+	if d := math.Hypot(b.Table.WidthMM, b.Table.DepthMM); d > 0 {
+		return d
+	}
+	return optics.MaxLengthMM
 }

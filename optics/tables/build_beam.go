@@ -1,6 +1,8 @@
 package tables
 
 import (
+	"slices"
+
 	"fmt"
 
 	"raytable/optics"
@@ -17,6 +19,7 @@ type beamColumn struct {
 // columns (the share of the source's power, peak irradiance) belong at the end of this list.
 var beamColumns = []beamColumn{
 	{Column{Head: Words{Page: "id"}, In: Text | Page}, func(e optics.BeamAt) Cell { return say(e.ID) }},
+	{Column{Head: Words{Page: "power arriving", Text: "arriving", Compare: "power arriving"}, Unit: Percent, In: Everywhere}, func(e optics.BeamAt) Cell { return num(e.PowerFraction, Fraction) }},
 	{Column{Head: Words{Page: "arriving, in plane", Text: "arriving w_t"}, Unit: MM, In: Text | Page}, func(e optics.BeamAt) Cell { return val(e.ArrivingWTMM) }},
 	{Column{Head: Words{Page: "arriving, across", Text: "arriving w_s"}, Unit: MM, In: Text | Page}, func(e optics.BeamAt) Cell { return val(e.ArrivingWSMM) }},
 	{Column{Head: Words{Page: "leaving, in plane", Text: "w_t", Compare: "beam radius in plane"}, Unit: MM, In: Everywhere}, func(e optics.BeamAt) Cell { return val(e.WTMM) }},
@@ -24,6 +27,29 @@ var beamColumns = []beamColumn{
 	{Column{Head: Words{Page: "wavefront radius in plane", Text: "R_t"}, Unit: MM, In: Text | Page}, func(e optics.BeamAt) Cell { return opt(e.RTMM, Value, Flat) }},
 	{Column{Head: Words{Page: "wavefront radius across", Text: "R_s"}, Unit: MM, In: Text | Page}, func(e optics.BeamAt) Cell { return opt(e.RSMM, Value, Flat) }},
 	{Column{Head: Words{Page: "power passed", Text: "transmitted", Compare: "power passed"}, Unit: Percent, In: Everywhere}, func(e optics.BeamAt) Cell { return num(e.Transmitted, Fraction) }},
+}
+
+// peakColumns are shown when the source states a power (irradiance) or pulses (fluence): the
+// peak at each element, 2P/(π w_t w_s) (README "Power").
+var peakColumns = []struct {
+	beamColumn
+	present func(e optics.BeamAt) bool
+}{
+	{beamColumn{Column{Head: same("peak irradiance"), Unit: WPerCM2, In: Everywhere}, func(e optics.BeamAt) Cell { return opt(e.PeakIrradianceWCM2, Value, Undefined) }},
+		func(e optics.BeamAt) bool { return e.PeakIrradianceWCM2 != nil }},
+	{beamColumn{Column{Head: same("peak fluence"), Unit: JPerCM2, In: Everywhere}, func(e optics.BeamAt) Cell { return opt(e.PeakFluenceJCM2, Value, Undefined) }},
+		func(e optics.BeamAt) bool { return e.PeakFluenceJCM2 != nil }},
+}
+
+// columnsFor is the beam table's columns for b: beamColumns and the peaks its source gives.
+func columnsFor(b *optics.BeamReport) []beamColumn {
+	cols := append([]beamColumn{}, beamColumns...)
+	for _, pc := range peakColumns {
+		if slices.ContainsFunc(b.Elements, pc.present) {
+			cols = append(cols, pc.beamColumn)
+		}
+	}
+	return cols
 }
 
 // beamSection is the Gaussian beam at each element, its 1/e² radii arriving and leaving; elements
@@ -36,12 +62,13 @@ func beamSection(b *optics.BeamReport) Section {
 			Args:  []Cell{val(b.WavelengthNM), val(b.M2)},
 		},
 	}
-	for _, c := range beamColumns {
+	cols := columnsFor(b)
+	for _, c := range cols {
 		sec.Columns = append(sec.Columns, c.Column)
 	}
 	for _, e := range b.Elements {
 		row := Row{Key: e.ID, Marked: e.Transmitted < 0.99, In: Everywhere}
-		for _, c := range beamColumns {
+		for _, c := range cols {
 			row.Cells = append(row.Cells, c.cell(e))
 		}
 		sec.Rows = append(sec.Rows, row)

@@ -59,7 +59,7 @@ func spacingSection(ss []optics.SpacingTolerance, b optics.SpacingBasis) Section
 	gap := Column{Head: same("gap"), Unit: MM, In: Text | Page}
 	tolerance := Column{Head: Words{Page: "hold the gap within ±", Text: "hold gap within ±", Compare: "gap tolerance ±"}, Unit: MM, In: Everywhere}
 	shown := Everywhere
-	notCritical := "Not critical: the gap does not matter to first order. Marked: the tightest."
+	notCritical := "Not critical: the gap does not matter to first order, or its tolerance exceeds the table's diagonal. Marked: the tightest."
 	var middle func(s optics.SpacingTolerance) []Cell
 	switch b.Kind {
 	case optics.SpacingDepthOfFocus:
@@ -102,7 +102,7 @@ func spacingSection(ss []optics.SpacingTolerance, b optics.SpacingBasis) Section
 	sec.Title.Args = args
 	if shown != Compare {
 		sec.Note.Args = args
-		sec.Note.Words.Text = "(- : the gap does not matter to first order)"
+		sec.Note.Words.Text = "(- : the gap does not matter to first order, or its tolerance exceeds the table's diagonal)"
 	}
 
 	tightest := math.Inf(1)

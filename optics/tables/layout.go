@@ -53,6 +53,8 @@ const (
 	PS
 	FS
 	MRad
+	WPerCM2
+	JPerCM2
 )
 
 // unitWords spells each unit in each layout.
@@ -68,6 +70,8 @@ var unitWords = [...]Words{
 	PS:       same("ps"),
 	FS:       same("fs"),
 	MRad:     same("mrad"),
+	WPerCM2:  {Page: "W/cm²", Text: "W/cm2", Compare: "W/cm²"},
+	JPerCM2:  {Page: "J/cm²", Text: "J/cm2", Compare: "J/cm²"},
 }
 
 // In is u as layout l writes it; "" when l writes no unit.

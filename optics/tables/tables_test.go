@@ -106,7 +106,7 @@ func TestDemoSections(t *testing.T) {
 		t.Errorf("EFL row reads %q %q %q", efl.QuantityLabel(Text), efl.Cells[0].In(Text), efl.Cells[0].In(Page))
 	}
 	beam := tb.Sections[tb.byName[Beam]]
-	if got := beam.Rows[1].Cells[7]; got.In(Text) != "0.9985" || got.In(Page) != "99.848 %" {
+	if got := beam.Rows[1].Cells[8]; got.In(Text) != "0.9985" || got.In(Page) != "99.848 %" {
 		t.Errorf("PH passes %q / %q of the beam, want 0.9985 / 99.848 %%", got.In(Text), got.In(Page))
 	}
 }
