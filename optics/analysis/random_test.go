@@ -74,10 +74,23 @@ func randomBench(rng *rand.Rand) *optics.Bench {
 		b.Source.Kind = optics.SourceCollimated
 		b.Source.SemiDiameterMM = f(pick(1e-6, 0.01, 0.5, 1, 5, 20))
 		b.Source.FieldAnglesDeg = []float64{0, pick(0, 0.1, 2, 10, -30)}
-	} else {
+	} else if rng.IntN(4) != 0 {
 		b.Source.Kind = optics.SourcePoint
 		b.Source.NA = f(pick(0.001, 0.05, 0.3, 0.9))
 		b.Source.ObjectHeightsMM = []float64{0, pick(0, 0.5, -3, 20)}
+	} else {
+		// A fibre face: its mode is the beam (README, 'Fibres, mode targets and cylindrical lenses').
+		b.Source.Kind = optics.SourceFiber
+		b.Source.MFDUM = f(pick(3, 6.2, 10.4, 25))
+		if rng.IntN(2) == 0 {
+			b.Source.NA = f(pick(0.05, 0.14))
+		}
+	}
+	switch rng.IntN(4) { // power or pulses (README, 'Power')
+	case 0:
+		b.Source.PowerMW = f(pick(1e-3, 5, 35, 2e4))
+	case 1:
+		b.Source.Pulse = &optics.Pulse{EnergyUJ: pick(0.1, 50, 1e4), DurationNS: pick(1e-5, 0.01, 10), RateHz: pick(1, 1e3, 8e7)}
 	}
 	if rng.IntN(3) == 0 {
 		b.Source.FanRays = func(n int) *int { return &n }(1 + rng.IntN(5))
@@ -85,10 +98,13 @@ func randomBench(rng *rand.Rand) *optics.Bench {
 	if rng.IntN(3) == 0 {
 		b.Source.Rays = []optics.ExplicitRay{{HeightMM: pick(0, 1, -5), AngleDeg: pick(0, 3, -45, 89), XMM: pick(0, 2), XAngleDeg: pick(0, 1, -20)}}
 	}
-	if rng.IntN(2) == 0 {
+	if b.Source.Kind != optics.SourceFiber && rng.IntN(2) == 0 {
 		b.Source.Beam = &optics.Beam{WaistRadiusMM: pick(1e-6, 0.001, 0.01, 0.45, 3, 1e3), WaistAtMM: pick(0, -250, 100, 1e4, -1e6)}
 		if rng.IntN(2) == 0 {
 			b.Source.Beam.M2 = f(pick(1, 1.3, 15, 1e4))
+		}
+		if rng.IntN(3) == 0 { // an elliptical, astigmatic beam
+			b.Source.Beam.Sagittal = &optics.BeamPlane{WaistRadiusMM: pick(0.002, 0.3, 2), WaistAtMM: pick(0, -40, 500), M2: f(pick(1, 1.8))}
 		}
 	}
 	n := 1 + rng.IntN(10)
@@ -113,7 +129,19 @@ func randomBench(rng *rand.Rand) *optics.Bench {
 			}
 			return &r
 		}
-		switch rng.IntN(6) {
+		if rng.IntN(6) == 0 {
+			e.DamageWCM2 = f(pick(1e-3, 10, 1e6))
+		}
+		cylinder := func() string { return []string{"", "", optics.CylinderVertical, optics.CylinderHorizontal}[rng.IntN(4)] }
+		coating := func() {
+			switch rng.IntN(3) {
+			case 0:
+				e.Coating = optics.CoatingNone
+			case 1:
+				e.FaceReflectance = f(pick(0, 0.01, 0.5))
+			}
+		}
+		switch rng.IntN(10) {
 		case 0:
 			e.Type = optics.TypeLens
 			faces := 2 + rng.IntN(2)
@@ -126,8 +154,12 @@ func randomBench(rng *rand.Rand) *optics.Bench {
 				}
 			}
 			e.DiameterMM = diameter
+			e.CylinderAxis = cylinder()
+			coating()
 		case 1:
 			e.Type = optics.TypeThinLens
+			e.CylinderAxis = cylinder()
+			coating()
 			e.FocalMM = f(pick(1, -1, 50, -50, 250, 1e5, 0.01, 1e-6, -1e6))
 			e.DiameterMM = diameter
 			// Half the time after a thin lens, make the pair afocal (gap f1 + f2).
@@ -141,6 +173,9 @@ func randomBench(rng *rand.Rand) *optics.Bench {
 			e.RadiusMM = radius()
 			e.TurnDeg = f(pick(90, -90, 180, -180, 1, 45, -135, 179.9, 0.01))
 			e.DiameterMM = diameter
+			if rng.IntN(2) == 0 {
+				e.Reflectance = f(pick(0, 0.5, 0.99, 1))
+			}
 		case 3:
 			e.Type = optics.TypeAperture
 			e.DiameterMM = f(pick(1e-6, 0.01, 1, 5, 25, 1e6))
@@ -148,6 +183,32 @@ func randomBench(rng *rand.Rand) *optics.Bench {
 			e.Type = optics.TypeScreen
 			if rng.IntN(2) == 0 {
 				e.WidthMM = f(pick(1, 8.8, 50))
+			}
+		case 5:
+			e.Type = optics.TypeFiber
+			e.MFDUM = f(pick(3, 6.2, 10.4))
+		case 6:
+			e.Type = optics.TypeModeTarget
+			e.WaistRadiusMM = f(pick(0.002, 0.05, 1))
+			if rng.IntN(2) == 0 {
+				e.WaistAtMM = f(pick(-5, 0, 30))
+			}
+		case 7:
+			e.Type = optics.TypePeriscope
+			e.RiseMM = f(pick(-40, 25, 60))
+			e.TurnDeg = f(pick(0, 90, -90, 30, 180))
+			e.DiameterMM = diameter
+		case 8:
+			// A splitter passed straight through: a plate or a surface (README, bench format).
+			e.Type = optics.TypeSplitter
+			e.TurnDeg = f(pick(90, -90, 60, 150))
+			e.DiameterMM = diameter
+			if rng.IntN(2) == 0 {
+				e.ThicknessMM = f(pick(0.5, 3, 10))
+				e.Material = "fused-silica"
+			}
+			if rng.IntN(3) == 0 {
+				e.Reflect = f(pick(0, 0.04, 0.5, 1))
 			}
 		default:
 			e.Type = optics.TypeDump
