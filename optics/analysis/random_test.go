@@ -132,7 +132,9 @@ func randomBench(rng *rand.Rand) *optics.Bench {
 		if rng.IntN(6) == 0 {
 			e.DamageWCM2 = f(pick(1e-3, 10, 1e6))
 		}
-		cylinder := func() string { return []string{"", "", optics.CylinderVertical, optics.CylinderHorizontal}[rng.IntN(4)] }
+		cylinder := func() string {
+			return []string{"", "", optics.CylinderVertical, optics.CylinderHorizontal}[rng.IntN(4)]
+		}
 		coating := func() {
 			switch rng.IntN(3) {
 			case 0:
