@@ -264,6 +264,7 @@ const (
 	SpacingDepthOfFocus     = "depth-of-focus"    // the image must stay within the depth of focus
 	SpacingDiffractionAngle = "diffraction-angle" // the output must stay collimated to its diffraction angle
 	SpacingNone             = "none"              // no lens, thin lens or mirror: no gap changes the light
+	SpacingVirtualImage     = "virtual-image"     // the output diverges from a virtual image: no screen can hold its focus
 	// Spacing tolerances from the beam (README, Report, spacing):
 	SpacingBeamRayleigh = "beam-rayleigh" // the output beam's waist must stay within its Rayleigh range of where it was
 )

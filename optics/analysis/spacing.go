@@ -45,7 +45,12 @@ func SpacingTolerances(b *optics.Bench, p *optics.Path, tan paraxial.Result) ([]
 	s := spacingProbe{src: &b.Source, ref: ref, last: last, start: tan.MarginalStart}
 	s.focus = tan.Values.ImageDistanceMM != nil
 	var allowance float64 // depth of focus (mm) or diffraction angle (rad); 0 when there is none
-	if s.focus {
+	switch {
+	case s.focus && *tan.Values.ImageDistanceMM < 0:
+		// A virtual image lies upstream of the last vertex: the output diverges and there is no
+		// focus for a depth of focus to hold, so the image shifts are given without tolerances.
+		basis.Kind = optics.SpacingVirtualImage
+	case s.focus:
 		basis.Kind = optics.SpacingDepthOfFocus
 		if na := tan.Values.ImageNA; na != nil {
 			basis.ImageNA = ptr(*na)
@@ -54,7 +59,7 @@ func SpacingTolerances(b *optics.Bench, p *optics.Path, tan paraxial.Result) ([]
 				basis.DepthOfFocusMM = ptr(allowance)
 			}
 		}
-	} else {
+	default:
 		basis.Kind = optics.SpacingDiffractionAngle
 		w := math.Abs(tan.Marginal[last].Y)
 		basis.OutputRadiusMM = ptr(w)

@@ -92,6 +92,15 @@ func spacingSection(ss []optics.SpacingTolerance, b optics.SpacingBasis) Section
 			return []Cell{optVal(s.WaistShiftPerMM)}
 		}
 		sec.Note.Words.Page = "From the Gaussian beam. Each gap changed alone, everything after it moving along. The tolerance keeps the output beam's waist within its own Rayleigh range, %[2]s mm, of where it lies now (%[4]s mm from %[3]s). " + notCritical
+	case optics.SpacingVirtualImage:
+		sec.Title.Words.Text = "SPACING at %[1]s nm: the output diverges from a virtual image; no focus to hold"
+		sec.Columns = []Column{id, gap,
+			{Head: Words{Page: "image moves", Text: "image shift"}, Unit: MMPerMM, In: Text | Page},
+			tolerance}
+		middle = func(s optics.SpacingTolerance) []Cell {
+			return []Cell{optVal(s.ImageShiftPerMM)}
+		}
+		sec.Note.Words.Page = "The output diverges from a virtual image upstream of the last element: no screen holds its focus, so no gap has a tolerance. Each gap changed alone, everything after it moving along."
 	default:
 		// Kind none comes with no rows; any others are only paired on the compare page.
 		shown = Compare
@@ -103,6 +112,9 @@ func spacingSection(ss []optics.SpacingTolerance, b optics.SpacingBasis) Section
 	if shown != Compare {
 		sec.Note.Args = args
 		sec.Note.Words.Text = "(- : the gap does not matter to first order, or its tolerance exceeds the table's diagonal)"
+		if b.Kind == optics.SpacingVirtualImage {
+			sec.Note.Words.Text = "(no tolerances: there is no focus to hold)"
+		}
 	}
 
 	tightest := math.Inf(1)
