@@ -45,6 +45,7 @@ func runArms(b *optics.Bench, arms []optics.Arm) *optics.Report {
 	r.Arms = armReports(arms, full, lengths)
 	r.Power = beam.CombinePower(arms, full)
 	r.Meetings = meetings(arms, full, lengths)
+	r.Coupling = armCouplings(arms, full)
 	r.Warnings = append(r.Warnings, armWarnings(arms, r)...)
 	r.Board.Arms = boardArms(arms, r)
 	return r
@@ -109,4 +110,28 @@ func systemValues(p *optics.Path, tan, sag optics.PlaneValues) optics.SystemValu
 		sv.LastVertexPathMM = p.Surfaces[last].PathMM
 	}
 	return sv
+}
+
+// armCouplings lists the coupling into every fibre and mode target of every arm: the main line's,
+// then each further arm's own targets, computed on that arm's beam (its source, power share and
+// path), each target once.
+func armCouplings(arms []optics.Arm, full []*optics.Report) []optics.Coupling {
+	out := full[0].Coupling
+	seen := map[string]bool{}
+	for _, c := range out {
+		seen[c.Element] = true
+	}
+	for i := 1; i < len(arms); i++ {
+		own := map[string]bool{}
+		for _, e := range arms[i].Bench.Elements[min(arms[i].Own, len(arms[i].Bench.Elements)):] {
+			own[e.ID] = true
+		}
+		for _, c := range full[i].Coupling {
+			if own[c.Element] && !seen[c.Element] {
+				seen[c.Element] = true
+				out = append(out, c)
+			}
+		}
+	}
+	return out
 }
