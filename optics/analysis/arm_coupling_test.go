@@ -15,7 +15,7 @@ func TestCouplingInAReflectedArm(t *testing.T) {
 	f := func(v float64) *float64 { return &v }
 	b := &optics.Bench{
 		Format: optics.FormatBenchV1, WavelengthsNM: []float64{1064},
-		Table:  optics.Table{Grid: optics.GridMetric25, WidthMM: 600, DepthMM: 400, BeamHeightMM: 75},
+		Table: optics.Table{Grid: optics.GridMetric25, WidthMM: 600, DepthMM: 400, BeamHeightMM: 75},
 		Source: optics.Source{XMM: 50, YMM: 100, Kind: optics.SourceCollimated, SemiDiameterMM: f(1),
 			Beam: &optics.Beam{WaistRadiusMM: 1}},
 		Elements: []optics.Element{
