@@ -68,7 +68,7 @@ func BenchmarkBenchPageUncached(b *testing.B) { benchPage(b, -1) }
 
 func benchPage(b *testing.B, cacheEntries int) {
 	mem := store.NewMem()
-	ts := &testServer{Server: New(Config{Store: mem, CacheEntries: cacheEntries}), mem: mem}
+	ts := &testServer{Server: New(Config{Store: mem, AllowedHosts: testHosts, CacheEntries: cacheEntries}), mem: mem}
 	id := ts.startDemo(b)
 	var pageBytes int
 	b.ReportAllocs()

@@ -28,6 +28,7 @@ func newCountingServer(t testing.TB, entries int) *countingServer {
 	clock := time.Date(2026, 3, 1, 9, 0, 0, 0, time.UTC)
 	s := New(Config{
 		Store:        mem,
+		AllowedHosts: testHosts,
 		Now:          func() time.Time { clock = clock.Add(time.Second); return clock },
 		CacheEntries: entries,
 		Analyze: func(b *optics.Bench) (*optics.Report, error) {
@@ -76,7 +77,7 @@ func TestCacheAnalyzesARevisionOnce(t *testing.T) {
 func TestCachedAnswersMatchUncached(t *testing.T) {
 	cs := newCountingServer(t, 0)
 	id := cs.startDemo(t)
-	fresh := &testServer{Server: New(Config{Store: cs.mem, CacheEntries: -1}), mem: cs.mem}
+	fresh := &testServer{Server: New(Config{Store: cs.mem, AllowedHosts: testHosts, CacheEntries: -1}), mem: cs.mem}
 	for _, target := range revisionRoutes(id) {
 		cs.mustGet(t, target) // fills the cache
 		cached := cs.mustGet(t, target)

@@ -13,6 +13,8 @@ import (
 const (
 	eBadRequest  = "bad_request" // the body cannot be read as what it claims to be
 	eUnsupported = "unsupported" // the body is of a type the route does not take
+	eForbidden   = "forbidden"   // a request that changes state came from a page of another site
+	eWrongHost   = "wrong_host"  // the Host header is not one this server answers for
 )
 
 // statusByCode is the one table from error codes to HTTP statuses. A bad import body is the
@@ -24,6 +26,8 @@ var statusByCode = map[string]int{
 	optics.EInternal: http.StatusInternalServerError,
 	eBadRequest:      http.StatusBadRequest,
 	eUnsupported:     http.StatusUnsupportedMediaType,
+	eForbidden:       http.StatusForbidden,
+	eWrongHost:       http.StatusMisdirectedRequest,
 }
 
 // statusOf maps an error to its status; anything not an *optics.Error is internal.
@@ -37,10 +41,12 @@ func statusOf(err error) int {
 // titles are the headings of error pages by status.
 var titles = map[int]string{
 	http.StatusBadRequest:            "That request could not be read",
+	http.StatusForbidden:             "That request came from another site",
 	http.StatusNotFound:              "No such page or design",
 	http.StatusMethodNotAllowed:      "That page does not take this kind of request",
 	http.StatusRequestEntityTooLarge: "That is too large",
 	http.StatusUnsupportedMediaType:  "That kind of request body is not accepted here",
+	http.StatusMisdirectedRequest:    "This server does not answer for that name",
 	http.StatusUnprocessableEntity:   "The bench breaks a rule",
 	http.StatusInternalServerError:   "Something went wrong on our side",
 }

@@ -66,7 +66,7 @@ func TestRequestsDoEachStepOnce(t *testing.T) {
 // decoded from the store once, without checking its rules again.
 func TestEditOfAnUncachedRevisionDecodesItOnce(t *testing.T) {
 	mem := store.NewMem()
-	ts := &testServer{Server: New(Config{Store: mem, CacheEntries: -1}), mem: mem}
+	ts := &testServer{Server: New(Config{Store: mem, AllowedHosts: testHosts, CacheEntries: -1}), mem: mem}
 	id := ts.startDemo(t)
 	vals := ts.pageForm(t, id)
 	vals.Set("elements[2].gap_mm", "160")

@@ -16,17 +16,22 @@ import (
 	"raytable/server/store"
 )
 
-// testServer is a server over an in-memory store with a clock that ticks one second per call.
+// testHosts is the Host allow-list of test servers: httptest requests name example.com.
+var testHosts = []string{"example.com"}
+
+// testServer is a server over an in-memory store with a clock that ticks one second per call. Its
+// requests carry the cookies earlier responses set, as one browser's would.
 type testServer struct {
 	*Server
-	mem *store.Mem
+	mem     *store.Mem
+	cookies map[string]*http.Cookie
 }
 
 func newTestServer(t testing.TB) *testServer {
 	t.Helper()
 	mem := store.NewMem()
 	clock := time.Date(2026, 3, 1, 9, 0, 0, 0, time.UTC)
-	s := New(Config{Store: mem, Now: func() time.Time { clock = clock.Add(time.Second); return clock }})
+	s := New(Config{Store: mem, AllowedHosts: testHosts, Now: func() time.Time { clock = clock.Add(time.Second); return clock }})
 	return &testServer{Server: s, mem: mem}
 }
 
@@ -36,8 +41,22 @@ func (ts *testServer) do(t testing.TB, method, target string, body io.Reader, co
 	if contentType != "" {
 		req.Header.Set("Content-Type", contentType)
 	}
+	return ts.send(req)
+}
+
+// send serves a request with the cookies kept so far and keeps the ones the response sets.
+func (ts *testServer) send(req *http.Request) *httptest.ResponseRecorder {
+	for _, c := range ts.cookies {
+		req.AddCookie(c)
+	}
 	rec := httptest.NewRecorder()
 	ts.ServeHTTP(rec, req)
+	for _, c := range rec.Result().Cookies() {
+		if ts.cookies == nil {
+			ts.cookies = map[string]*http.Cookie{}
+		}
+		ts.cookies[c.Name] = c
+	}
 	return rec
 }
 

@@ -2,11 +2,12 @@ package server
 
 import (
 	"encoding/json"
-	"github.com/go-chi/chi/v5"
 	"io"
 	"mime"
 	"net/http"
 	"strings"
+
+	"github.com/go-chi/chi/v5"
 
 	"raytable/optics"
 	"raytable/server/demo"
@@ -15,11 +16,24 @@ import (
 )
 
 // importBench stores a bench file sent as the request body (JSON) or as a form (file field
-// `bench`, or pasted text in `bench_text`) and answers 303 to the new revision. A bad file answers
+// `bench`, or pasted text in `bench_text`) and answers 303 to the new revision, which joins this
+// browser's recent designs. Other bodies answer 415. A bad file answers
 // 400 with every problem named by its path: as JSON to a JSON request, on the start page otherwise.
 func (s *Server) importBench(w http.ResponseWriter, r *http.Request) {
-	mt, _, _ := mime.ParseMediaType(r.Header.Get("Content-Type"))
+	ct := r.Header.Get("Content-Type")
+	mt, _, _ := mime.ParseMediaType(ct)
 	isForm := mt == "multipart/form-data" || mt == "application/x-www-form-urlencoded"
+	if !isForm && mt != "application/json" {
+		// A page on another site may post text/plain without asking first; the origin check
+		// refuses it, and this keeps a bench from arriving in any body a browser form can make
+		// up without the page's own form.
+		if ct == "" {
+			ct = "none"
+		}
+		writeJSONError(w, http.StatusUnsupportedMediaType, optics.Errorf(eUnsupported,
+			"send the bench as application/json, or as a form (multipart/form-data or application/x-www-form-urlencoded); Content-Type was %s", ct))
+		return
+	}
 	data, err := importData(r, isForm)
 	if err == nil && len(strings.TrimSpace(string(data))) == 0 {
 		err = optics.Invalid([]optics.Problem{{Message: "no bench file was given: choose a file or paste its JSON"}})
@@ -53,7 +67,7 @@ func (s *Server) importBench(w http.ResponseWriter, r *http.Request) {
 		s.fail(w, r, err)
 		return
 	}
-	http.Redirect(w, r, "/r/"+rev.ID, http.StatusSeeOther)
+	s.openRevision(w, r, rev.ID)
 }
 
 // importData reads the bench file from the body or the form.
@@ -121,6 +135,26 @@ func (s *Server) demo(w http.ResponseWriter, r *http.Request) {
 	s.startFrom(w, r, demo.Bench, "the demo")
 }
 
+// demoPage answers GET /demo with the button that starts the demo: a GET stores nothing.
+func (s *Server) demoPage(w http.ResponseWriter, r *http.Request) {
+	s.render(w, r, http.StatusOK, view.StartOne(view.StartChoice{}))
+}
+
+// demoNamedPage answers GET /demo/{name} with the button that starts that bench.
+func (s *Server) demoNamedPage(w http.ResponseWriter, r *http.Request) {
+	st, ok := demo.StartNamed(chi.URLParam(r, "name"))
+	if !ok {
+		s.fail(w, r, optics.Errorf(optics.ENotFound, "there is no start bench %q", chi.URLParam(r, "name")))
+		return
+	}
+	s.render(w, r, http.StatusOK, view.StartOne(startChoice(st)))
+}
+
+// startChoice is how the pages offer a start bench: a button posting to /demo/{name}.
+func startChoice(st demo.Start) view.StartChoice {
+	return view.StartChoice{Action: "/demo/" + st.Name, Button: st.Button, About: st.About, TestID: "start-" + st.Name}
+}
+
 // demoNamed stores a fresh copy of one of the other start benches (demo.Starts).
 func (s *Server) demoNamed(w http.ResponseWriter, r *http.Request) {
 	st, ok := demo.StartNamed(chi.URLParam(r, "name"))
@@ -131,7 +165,8 @@ func (s *Server) demoNamed(w http.ResponseWriter, r *http.Request) {
 	s.startFrom(w, r, st.Bench, "the "+st.Name+" demo")
 }
 
-// startFrom stores a fresh copy of an embedded bench and answers 303 to it.
+// startFrom stores a fresh copy of an embedded bench, adds it to this browser's recent designs and
+// answers 303 to it.
 func (s *Server) startFrom(w http.ResponseWriter, r *http.Request, data []byte, name string) {
 	b, err := optics.Decode(data)
 	if err != nil {
@@ -143,7 +178,7 @@ func (s *Server) startFrom(w http.ResponseWriter, r *http.Request, data []byte, 
 		s.fail(w, r, err)
 		return
 	}
-	http.Redirect(w, r, "/r/"+rev.ID, http.StatusSeeOther)
+	s.openRevision(w, r, rev.ID)
 }
 
 // storeValid stores a bench that Decode has just read and checked as a new revision without a

@@ -20,7 +20,7 @@ import (
 func TestNoRoutePanics(t *testing.T) {
 	var logs bytes.Buffer
 	mem := store.NewMem()
-	s := New(Config{Store: mem, Logger: slog.New(slog.NewTextHandler(&logs, nil)), Now: time.Now})
+	s := New(Config{Store: mem, AllowedHosts: testHosts, Logger: slog.New(slog.NewTextHandler(&logs, nil)), Now: time.Now})
 	ts := &testServer{Server: s, mem: mem}
 	id := ts.startDemo(t)
 	good := ts.pageForm(t, id)

@@ -10,21 +10,18 @@ import (
 	"raytable/web/view"
 )
 
-// recentCount is how many designs the home page lists.
-const recentCount = 12
-
 func (s *Server) home(w http.ResponseWriter, r *http.Request) {
 	s.renderHome(w, r, http.StatusOK, view.HomePage{})
 }
 
 func (s *Server) renderHome(w http.ResponseWriter, r *http.Request, status int, p view.HomePage) {
-	revs, err := s.store.Recent(recentCount)
+	revs, err := s.recentRevisions(r)
 	if err != nil {
 		s.fail(w, r, err)
 		return
 	}
 	for _, st := range demo.Starts {
-		p.Starts = append(p.Starts, view.StartChoice{Action: "/demo/" + st.Name, Button: st.Button, About: st.About, TestID: "start-" + st.Name})
+		p.Starts = append(p.Starts, startChoice(st))
 	}
 	for _, rev := range revs {
 		p.Recent = append(p.Recent, view.Recent{
@@ -61,6 +58,7 @@ func (s *Server) benchPage(w http.ResponseWriter, r *http.Request) {
 	if arm != "" {
 		p.Links.SideSVG = addQuery(p.Links.SideSVG, "arm="+url.QueryEscape(arm))
 	}
+	rememberRevision(w, r, d.rev.ID)
 	s.render(w, r, http.StatusOK, view.Bench(p))
 }
 
@@ -81,6 +79,7 @@ func (s *Server) presentPage(w http.ResponseWriter, r *http.Request) {
 		s.fail(w, r, err)
 		return
 	}
+	rememberRevision(w, r, d.rev.ID)
 	s.render(w, r, http.StatusOK, view.Present(view.PresentPage{
 		ID: d.rev.ID, Title: view.BenchTitle(d.bench), Notes: d.bench.Notes, Created: when(d),
 		Links: links(d, paraxial), Result: res,

@@ -43,6 +43,10 @@ type Config struct {
 	// as the server computes no other (a stored revision passed before it was saved, a preview
 	// just before). Tests count calls through it.
 	Analyze func(*optics.Bench) (*optics.Report, error)
+	// AllowedHosts are the names the server answers for, in the Host header with any port; others
+	// get 421 (mw_hosts.go). Empty means the loopback names only; `raytable serve` adds the listen
+	// address's host (DefaultAllowedHosts).
+	AllowedHosts []string
 }
 
 // Server answers raytable's web requests.
@@ -52,6 +56,7 @@ type Server struct {
 	now    func() time.Time
 	random io.Reader
 	router chi.Router
+	hosts  []string // the Host allow-list
 	// analyze computes a report; the cache keeps it for stored revisions (compute.go).
 	analyze func(*optics.Bench) (*optics.Report, error)
 	cache   *revCache
@@ -74,6 +79,10 @@ func New(cfg Config) *Server {
 		entries = defaultCacheEntries
 	}
 	s.cache = newRevCache(entries)
+	s.hosts = cfg.AllowedHosts
+	if len(s.hosts) == 0 {
+		s.hosts = loopbackHosts
+	}
 	s.router = s.routes()
 	return s
 }
@@ -84,7 +93,10 @@ func (s *Server) ServeHTTP(w http.ResponseWriter, r *http.Request) { s.router.Se
 func (s *Server) routes() chi.Router {
 	r := chi.NewRouter()
 	// GetHead answers HEAD on every GET route, for link checkers and curl -I.
-	r.Use(logRequests(s.log), securityHeaders, recoverPanics(s.log, s.failStatus), limitBody(maxBodyBytes), middleware.GetHead,
+	// The Host and origin checks come before any handler, so a refused request reads and stores
+	// nothing.
+	r.Use(logRequests(s.log), securityHeaders, recoverPanics(s.log, s.failStatus), checkHosts(s.hosts, s.fail), sameOrigin(s.fail),
+		limitBody(maxBodyBytes), middleware.GetHead,
 		// Pages, drawings and reports are text that shrinks five- to tenfold; a shared link
 		// opens fast on a slow lab network.
 		middleware.Compress(5, "text/html", "image/svg+xml", "application/json", "text/css", "text/javascript", "application/javascript"))
@@ -93,8 +105,10 @@ func (s *Server) routes() chi.Router {
 
 	r.Get("/", s.home)
 	r.Post("/import", s.importBench)
-	r.Get("/demo", s.demo)
+	// GET and HEAD never store: they show the start button, which posts.
+	r.Get("/demo", s.demoPage)
 	r.Post("/demo", s.demo)
+	r.Get("/demo/{name}", s.demoNamedPage)
 	r.Post("/demo/{name}", s.demoNamed)
 	r.Get("/compare", s.compare)
 	r.Handle("/static/*", http.StripPrefix("/static/", staticFiles()))
