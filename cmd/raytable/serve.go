@@ -28,8 +28,10 @@ func runServe(ctx context.Context, e env) int {
 	fs.SetOutput(e.stderr)
 	addr := fs.String("addr", envOr(e, "RAYTABLE_ADDR", defaultAddr), "address to listen on (environment RAYTABLE_ADDR)")
 	storePath := fs.String("store", envOr(e, "RAYTABLE_STORE", defaultStore), "file that holds the designs (environment RAYTABLE_STORE)")
+	hostList := fs.String("allowed-hosts", envOr(e, "RAYTABLE_ALLOWED_HOSTS", ""),
+		"comma-separated host names the server answers for, with any port; default the --addr host, localhost, 127.0.0.1 and [::1] (environment RAYTABLE_ALLOWED_HOSTS)")
 	fs.Usage = func() {
-		fmt.Fprintln(e.stderr, "usage: raytable [serve] [--addr HOST:PORT] [--store FILE]")
+		fmt.Fprintln(e.stderr, "usage: raytable [serve] [--addr HOST:PORT] [--store FILE] [--allowed-hosts NAME,...]")
 		fs.PrintDefaults()
 	}
 	if err := fs.Parse(e.args); err != nil {
@@ -57,7 +59,8 @@ func runServe(ctx context.Context, e env) int {
 		return exitInternal
 	}
 	defer st.Close()
-	srv := server.HTTPServer(server.New(server.Config{Store: st, Logger: log}), log)
+	hosts := allowedHosts(*hostList, *addr)
+	srv := server.HTTPServer(server.New(server.Config{Store: st, Logger: log, AllowedHosts: hosts}), log)
 	fmt.Fprintf(e.stdout, "raytable is serving at http://%s/ (designs in %s); press Ctrl+C to stop\n", ln.Addr(), *storePath)
 
 	done := make(chan error, 1)
@@ -80,6 +83,16 @@ func runServe(ctx context.Context, e env) int {
 	}
 	log.Info("stopped")
 	return exitOK
+}
+
+// allowedHosts is the Host allow-list: the names given, or else the default for the listen
+// address (server.DefaultAllowedHosts). Names given replace the default rather than add to it, so
+// a server behind a proxy can answer for the proxy's name alone.
+func allowedHosts(list, addr string) []string {
+	if hosts := server.ParseAllowedHosts(list); len(hosts) > 0 {
+		return hosts
+	}
+	return server.DefaultAllowedHosts(addr)
 }
 
 func envOr(e env, key, def string) string {

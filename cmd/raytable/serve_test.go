@@ -8,6 +8,7 @@ import (
 	"net/http"
 	"path/filepath"
 	"regexp"
+	"slices"
 	"strings"
 	"sync"
 	"testing"
@@ -101,6 +102,20 @@ func TestServeStartsAndStops(t *testing.T) {
 	if resp.StatusCode != http.StatusOK {
 		t.Errorf("GET /: %d", resp.StatusCode)
 	}
+	// A name not on the default list, as a rebound DNS name would bring, is refused.
+	req, err := http.NewRequest(http.MethodGet, base+"/", nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	req.Host = "rebound.example"
+	resp, err = client.Do(req)
+	if err != nil {
+		t.Fatal(err)
+	}
+	resp.Body.Close()
+	if resp.StatusCode != http.StatusMisdirectedRequest {
+		t.Errorf("GET / as rebound.example: %d, want 421", resp.StatusCode)
+	}
 	resp, err = client.Post(base+"/demo", "", nil)
 	if err != nil {
 		t.Fatal(err)
@@ -121,5 +136,22 @@ func TestServeStartsAndStops(t *testing.T) {
 	}
 	if !strings.Contains(errOut.String(), "stopped") {
 		t.Errorf("no stop line in the log: %s", errOut.String())
+	}
+}
+
+func TestAllowedHosts(t *testing.T) {
+	for _, tc := range []struct {
+		list, addr string
+		want       []string
+	}{
+		{"", "127.0.0.1:8080", []string{"localhost", "127.0.0.1", "::1"}},
+		{"", "10.1.2.3:8080", []string{"localhost", "127.0.0.1", "::1", "10.1.2.3"}},
+		{"", "0.0.0.0:8080", []string{"localhost", "127.0.0.1", "::1"}},
+		{"bench.lab, localhost", "0.0.0.0:8080", []string{"bench.lab", "localhost"}}, // given names replace the default
+		{" , ", "10.1.2.3:8080", []string{"localhost", "127.0.0.1", "::1", "10.1.2.3"}},
+	} {
+		if got := allowedHosts(tc.list, tc.addr); !slices.Equal(got, tc.want) {
+			t.Errorf("allowedHosts(%q, %q) = %q, want %q", tc.list, tc.addr, got, tc.want)
+		}
 	}
 }
