@@ -167,7 +167,7 @@ func (s *Server) render(w http.ResponseWriter, r *http.Request, status int, c te
 // fail answers an error with its status and an error page; internal errors are logged.
 func (s *Server) fail(w http.ResponseWriter, r *http.Request, err error) {
 	status := statusOf(err)
-	if status >= 500 {
+	if status >= 500 && !storeRefusal(err) {
 		s.log.Error("request failed", "method", r.Method, "path", r.URL.Path, "err", err)
 	}
 	s.render(w, r, status, view.Error(errorPage(status, err)))
