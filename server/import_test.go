@@ -111,7 +111,7 @@ func TestImport(t *testing.T) {
 			t.Error("a bench that breaks a rule was stored")
 		}
 	})
-		t.Run("syntax error", func(t *testing.T) {
+	t.Run("syntax error", func(t *testing.T) {
 		rec := ts.do(t, http.MethodPost, "/import", strings.NewReader(`{"format": `), "application/json")
 		if rec.Code != http.StatusBadRequest {
 			t.Errorf("status %d, want 400", rec.Code)

@@ -2,6 +2,7 @@ package server
 
 import (
 	"bytes"
+	"cmp"
 	"io"
 	"log/slog"
 	"net/http"
@@ -43,6 +44,9 @@ type Config struct {
 	// as the server computes no other (a stored revision passed before it was saved, a preview
 	// just before). Tests count calls through it.
 	Analyze func(*optics.Bench) (*optics.Report, error)
+	// WritesPerMinute is how many revisions one client address may store a minute (bursts of 20);
+	// 0 means the default, DefaultWritesPerMinute; a negative value sets no limit.
+	WritesPerMinute int
 }
 
 // Server answers raytable's web requests.
@@ -55,6 +59,7 @@ type Server struct {
 	// analyze computes a report; the cache keeps it for stored revisions (compute.go).
 	analyze func(*optics.Bench) (*optics.Report, error)
 	cache   *revCache
+	writes  *writeLimiter // nil: no limit
 }
 
 // New builds a server and its routes.
@@ -74,6 +79,9 @@ func New(cfg Config) *Server {
 		entries = defaultCacheEntries
 	}
 	s.cache = newRevCache(entries)
+	if perMinute := cmp.Or(cfg.WritesPerMinute, DefaultWritesPerMinute); perMinute > 0 {
+		s.writes = newWriteLimiter(perMinute, s.now)
+	}
 	s.router = s.routes()
 	return s
 }
@@ -84,7 +92,7 @@ func (s *Server) ServeHTTP(w http.ResponseWriter, r *http.Request) { s.router.Se
 func (s *Server) routes() chi.Router {
 	r := chi.NewRouter()
 	// GetHead answers HEAD on every GET route, for link checkers and curl -I.
-	r.Use(logRequests(s.log), securityHeaders, recoverPanics(s.log, s.failStatus), limitBody(maxBodyBytes), middleware.GetHead,
+	r.Use(logRequests(s.log), securityHeaders, recoverPanics(s.log, s.failStatus), limitBody(maxBodyBytes), s.limitWrites(s.writes), middleware.GetHead,
 		// Pages, drawings and reports are text that shrinks five- to tenfold; a shared link
 		// opens fast on a slow lab network.
 		middleware.Compress(5, "text/html", "image/svg+xml", "application/json", "text/css", "text/javascript", "application/javascript"))
