@@ -101,7 +101,7 @@ func (s *Bolt) Put(rev Revision) error {
 	return s.db.Update(func(tx *bolt.Tx) error {
 		// The record, its index entry and their keys, twice over for the pages bbolt copies on write.
 		if need := 2 * int64(len(data)+2*len(rev.ID)+8); s.maxBytes > 0 && tx.Size()+need > s.maxBytes {
-			return optics.Errorf(EFull, "the store holds %d MB, its limit is %d MB: no more designs can be saved here (ask whoever runs this server)", tx.Size()>>20, s.maxBytes>>20)
+			return optics.Errorf(EFull, "the store holds %d bytes and may grow to %d bytes (--max-store-mb): no more designs can be saved here; ask whoever runs this server", tx.Size(), s.maxBytes)
 		}
 		revs := tx.Bucket(bucketRevisions)
 		if revs.Get([]byte(rev.ID)) != nil {
