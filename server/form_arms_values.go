@@ -64,7 +64,7 @@ func (f *formReader) elements(list string) []optics.Element {
 // moreSources reads the further sources, each while its id input was sent.
 func (f *formReader) moreSources() []optics.MoreSource {
 	var out []optics.MoreSource
-	for k := 0; f.has(moreSourcePrefix(k)+"id"); k++ {
+	for k := 0; f.has(moreSourcePrefix(k) + "id"); k++ {
 		p := moreSourcePrefix(k)
 		m := optics.MoreSource{Source: f.sourceAt(p)}
 		f.fields(p, moreSourceOwn, &m)
