@@ -175,7 +175,9 @@ func (s *Server) render(w http.ResponseWriter, r *http.Request, status int, c te
 // fail answers an error with its status and an error page; internal errors are logged.
 func (s *Server) fail(w http.ResponseWriter, r *http.Request, err error) {
 	status := statusOf(err)
-	if status >= 500 && !storeRefusal(err) {
+	if storeRefusal(err) {
+		s.log.Warn("store refused a write", "method", r.Method, "path", r.URL.Path, "err", err)
+	} else if status >= 500 {
 		s.log.Error("request failed", "method", r.Method, "path", r.URL.Path, "err", err)
 	}
 	s.render(w, r, status, view.Error(errorPage(status, err)))
