@@ -76,7 +76,7 @@ func (s *Server) storeBench(b *optics.Bench, data []byte, parent *design, start 
 		pb = parent.bench
 	}
 	rev.Summary = summarize(pb, b, start)
-	return rev, s.store.Put(rev)
+	return rev, storeFailure(s.store.Put(rev))
 }
 
 // problemsOf returns the problems of an EInvalid error, and ok=false for any other error.

@@ -4,21 +4,27 @@ import (
 	"errors"
 	"net/http"
 	"strings"
+	"syscall"
 
 	"raytable/optics"
+	"raytable/server/store"
 	"raytable/web/view"
 )
 
 // Codes of the server's own errors, about the HTTP request rather than the bench in it.
 const (
-	eBadRequest  = "bad_request" // the body cannot be read as what it claims to be
-	eUnsupported = "unsupported" // the body is of a type the route does not take
-	eForbidden   = "forbidden"   // a request that changes state came from a page of another site
-	eWrongHost   = "wrong_host"  // the Host header is not one this server answers for
+	eBadRequest  = "bad_request"   // the body cannot be read as what it claims to be
+	eUnsupported = "unsupported"   // the body is of a type the route does not take
+	eForbidden   = "forbidden"     // a request that changes state came from a page of another site
+	eWrongHost   = "wrong_host"    // the Host header is not one this server answers for
+	eRateLimited = "rate_limited"  // this client has written too often; answered with Retry-After
+	eStoreFull   = store.EFull     // the store reached its size limit, or its disk is full
+	eReadOnly    = store.EReadOnly // the server serves its store without writing
 )
 
-// statusByCode is the one table from error codes to HTTP statuses. A bad import body is the
-// exception: it answers 400 (see importBench), since the request itself is what is wrong.
+// statusByCode is the one table from error codes to HTTP statuses: a malformed body 400, a
+// well-formed bench that breaks a rule 422 (on /import as on the edit form), too large 413, too
+// many writes 429, a full store 507, a read-only one 503.
 var statusByCode = map[string]int{
 	optics.EInvalid:  http.StatusUnprocessableEntity,
 	optics.ENotFound: http.StatusNotFound,
@@ -28,6 +34,9 @@ var statusByCode = map[string]int{
 	eUnsupported:     http.StatusUnsupportedMediaType,
 	eForbidden:       http.StatusForbidden,
 	eWrongHost:       http.StatusMisdirectedRequest,
+	eRateLimited:     http.StatusTooManyRequests,
+	eStoreFull:       http.StatusInsufficientStorage,
+	eReadOnly:        http.StatusServiceUnavailable,
 }
 
 // statusOf maps an error to its status; anything not an *optics.Error is internal.
@@ -49,6 +58,18 @@ var titles = map[int]string{
 	http.StatusMisdirectedRequest:    "This server does not answer for that name",
 	http.StatusUnprocessableEntity:   "The bench breaks a rule",
 	http.StatusInternalServerError:   "Something went wrong on our side",
+	http.StatusTooManyRequests:       "Too many changes in a short time",
+	http.StatusInsufficientStorage:   "The store is full",
+	http.StatusServiceUnavailable:    "Designs cannot be saved here now",
+}
+
+// storeFailure names a write the store refused for want of space: a full disk is the store's
+// own limit reached, 507 with a message, never a 500.
+func storeFailure(err error) error {
+	if errors.Is(err, syscall.ENOSPC) {
+		return optics.Errorf(eStoreFull, "the disk that holds the store is full: no more designs can be saved here (ask whoever runs this server)")
+	}
+	return err
 }
 
 // errorPage makes the page for an error. Internal errors show a plain sentence, never details.
@@ -57,7 +78,7 @@ func errorPage(status int, err error) view.ErrorPage {
 	if p.Title == "" {
 		p.Title = http.StatusText(status)
 	}
-	if status >= 500 {
+	if status >= 500 && !storeRefusal(err) {
 		p.Message = "The failure has been logged. Please try again, or go back to the start page."
 		return p
 	}
@@ -80,6 +101,13 @@ func bodyError(err error) error {
 		return optics.Errorf(optics.ETooLarge, "the request is larger than %d bytes (1 MiB), the most raytable accepts", maxBodyBytes)
 	}
 	return optics.Errorf(eBadRequest, "the request body could not be read: %v", err)
+}
+
+// storeRefusal reports whether err is the store declining a write (full or read-only): a 5xx
+// status whose message is for the user, since nothing failed.
+func storeRefusal(err error) bool {
+	c := optics.ErrorCode(err)
+	return c == eStoreFull || c == eReadOnly
 }
 
 func asOptics(err error, target **optics.Error) bool { return errors.As(err, target) }

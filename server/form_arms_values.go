@@ -56,10 +56,6 @@ const maxFormDepth = 64
 func (f *formReader) elements(list string) []optics.Element {
 	var out []optics.Element
 	for i := 0; f.has(fmt.Sprintf("%s[%d].type", list, i)); i++ {
-		if i >= maxFormElements {
-			f.add(list, "more than %d elements; a bench holds at most %d", maxFormElements, optics.MaxElements)
-			break
-		}
 		out = append(out, f.element(fmt.Sprintf("%s[%d].", list, i)))
 	}
 	return out
@@ -68,7 +64,7 @@ func (f *formReader) elements(list string) []optics.Element {
 // moreSources reads the further sources, each while its id input was sent.
 func (f *formReader) moreSources() []optics.MoreSource {
 	var out []optics.MoreSource
-	for k := 0; f.has(moreSourcePrefix(k)+"id") && k < maxFormElements; k++ {
+	for k := 0; f.has(moreSourcePrefix(k) + "id"); k++ {
 		p := moreSourcePrefix(k)
 		m := optics.MoreSource{Source: f.sourceAt(p)}
 		f.fields(p, moreSourceOwn, &m)

@@ -56,7 +56,7 @@ func putFields(v map[string]string, prefix string, fields []optics.Field, obj an
 		case *[]*float64:
 			v[path] = facesText(*x)
 		case *[]string:
-			v[path] = strings.Join(*x, ", ")
+			v[path] = namesText(*x)
 		case **int:
 			if *x != nil {
 				v[path] = strconv.Itoa(**x)

@@ -9,9 +9,10 @@ import (
 	"raytable/optics"
 )
 
-// maxFormElements bounds the element loop of a posted form; the bench rules allow fewer
-// (optics.MaxElements) and say so, this only stops a hostile form from looping long.
-const maxFormElements = 1000
+// The loops over a form's lists (elements, rays, further sources) read every item that was
+// posted and stop at the first index not sent, so the body cap bounds them; the bench rules then
+// judge the counts and say so. No list is cut short: a form that lost items would save a bench
+// with fewer than it showed.
 
 // formReader turns posted form values, named by their JSON paths, into a bench. It collects a
 // problem for every field it cannot read and keeps going, so that all of them are shown at once.
@@ -224,7 +225,7 @@ func (f *formReader) field(path string, fl optics.Field, obj any) {
 	case *[]*float64:
 		*p = f.faces(path)
 	case *[]string:
-		*p = splitList(f.get(path))
+		*p = f.names(path)
 	case **int:
 		*p = f.count(path)
 	case **optics.Beam:
@@ -232,7 +233,7 @@ func (f *formReader) field(path string, fl optics.Field, obj any) {
 	case **optics.Mount:
 		*p = optionalObject[optics.Mount](f, path+".", fl.Fields)
 	case *[]optics.ExplicitRay:
-		for i := 0; f.has(fmt.Sprintf("%s[%d].%s", path, i, fl.Fields[0].Key)) && i < maxFormElements; i++ {
+		for i := 0; f.has(fmt.Sprintf("%s[%d].%s", path, i, fl.Fields[0].Key)); i++ {
 			var r optics.ExplicitRay
 			f.fields(fmt.Sprintf("%s[%d].", path, i), fl.Fields, &r)
 			*p = append(*p, r)

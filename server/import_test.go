@@ -6,6 +6,7 @@ import (
 	"io"
 	"mime/multipart"
 	"net/http"
+	"net/http/httptest"
 	"strings"
 	"testing"
 
@@ -92,6 +93,22 @@ func TestImport(t *testing.T) {
 		ta := findAll(one(t, doc, "import-form"), byTag("textarea"))[0]
 		if ta.FirstChild == nil || !strings.Contains(ta.FirstChild.Data, `"colour": "red"`) {
 			t.Error("the pasted text was not kept")
+		}
+	})
+	t.Run("a well-formed bench that breaks a rule is 422", func(t *testing.T) {
+		n := ts.count(t)
+		rule := bytes.Replace(good, []byte(`"gap_mm": `), []byte(`"gap_mm": -`), 1)
+		pasted, ct := paste(rule)
+		for name, rec := range map[string]*httptest.ResponseRecorder{
+			"json":  ts.do(t, http.MethodPost, "/import", bytes.NewReader(rule), "application/json"),
+			"paste": ts.do(t, http.MethodPost, "/import", pasted, ct),
+		} {
+			if rec.Code != http.StatusUnprocessableEntity || !strings.Contains(rec.Body.String(), "gap_mm") {
+				t.Errorf("%s: status %d, want 422 naming gap_mm: %s", name, rec.Code, truncate(rec.Body.String(), 300))
+			}
+		}
+		if ts.count(t) != n {
+			t.Error("a bench that breaks a rule was stored")
 		}
 	})
 	t.Run("syntax error", func(t *testing.T) {

@@ -16,9 +16,10 @@ import (
 )
 
 // importBench stores a bench file sent as the request body (JSON) or as a form (file field
-// `bench`, or pasted text in `bench_text`) and answers 303 to the new revision, which joins this
-// browser's recent designs. Other bodies answer 415. A bad file answers
-// 400 with every problem named by its path: as JSON to a JSON request, on the start page otherwise.
+// `bench`, or pasted text in `bench_text`) and answers 303 to the new revision, which joins this browser's recent designs. Other bodies answer 415. A body that is not
+// a bench file (broken JSON, an unknown key, a wrong type) answers 400, a well-formed bench that
+// breaks a rule 422 as the edit form does (statusByCode), with every problem named by its path:
+// as JSON to a JSON request, on the start page otherwise.
 func (s *Server) importBench(w http.ResponseWriter, r *http.Request) {
 	ct := r.Header.Get("Content-Type")
 	mt, _, _ := mime.ParseMediaType(ct)
@@ -36,18 +37,21 @@ func (s *Server) importBench(w http.ResponseWriter, r *http.Request) {
 	}
 	data, err := importData(r, isForm)
 	if err == nil && len(strings.TrimSpace(string(data))) == 0 {
-		err = optics.Invalid([]optics.Problem{{Message: "no bench file was given: choose a file or paste its JSON"}})
+		msg := "no bench file was given: choose a file or paste its JSON"
+		err = &optics.Error{Code: eBadRequest, Message: msg, Problems: []optics.Problem{{Message: msg}}}
 	}
 	var b *optics.Bench
 	if err == nil {
 		b, err = optics.Decode(data)
+		err = malformedOrRule(data, err)
+	}
+	var rev store.Revision
+	if err == nil {
+		rev, err = s.storeValid(b, "imported")
 	}
 	if err != nil {
 		status := statusOf(err)
-		if status == http.StatusUnprocessableEntity {
-			status = http.StatusBadRequest // the body itself is bad
-		}
-		if status >= 500 {
+		if status >= 500 && !storeRefusal(err) {
 			s.fail(w, r, err)
 			return
 		}
@@ -62,12 +66,22 @@ func (s *Server) importBench(w http.ResponseWriter, r *http.Request) {
 		s.renderHome(w, r, status, p)
 		return
 	}
-	rev, err := s.storeValid(b, "imported")
-	if err != nil {
-		s.fail(w, r, err)
-		return
-	}
 	s.openRevision(w, r, rev.ID)
+}
+
+// malformedOrRule sorts a failed Decode: a body that is not a bench file at all (broken JSON, an
+// unknown key, a wrong type) is a bad request (400); a well-formed bench that breaks a rule keeps
+// its EInvalid code (422). Only DecodeTrusted, which reads as strictly but judges no rule, tells
+// the two apart, so it runs on the refused body alone.
+func malformedOrRule(data []byte, err error) error {
+	var e *optics.Error
+	if !asOptics(err, &e) || e.Code != optics.EInvalid {
+		return err
+	}
+	if _, readErr := optics.DecodeTrusted(data); readErr == nil {
+		return err
+	}
+	return &optics.Error{Code: eBadRequest, Message: e.Message, Problems: e.Problems}
 }
 
 // importData reads the bench file from the body or the form.

@@ -35,3 +35,38 @@ func TestLimitBody(t *testing.T) {
 }
 
 func optics413(err error) int { return statusOf(bodyError(err)) }
+
+// countingReader counts what was read of a body.
+type countingReader struct {
+	r io.Reader
+	n int
+}
+
+func (c *countingReader) Read(p []byte) (int, error) {
+	n, err := c.r.Read(p)
+	c.n += n
+	return n, err
+}
+
+// TestLimitBodyDrainsABoundedRest: after a 413 the rest of the body is read, up to maxDrainBytes
+// and no more, so that the client can read the answer and a huge body cannot hold the server.
+func TestLimitBodyDrainsABoundedRest(t *testing.T) {
+	for _, tc := range []struct{ size, want int }{
+		{1000, 1000},                          // all of a small rest
+		{20 << 20, 17 + maxDrainBytes + 4096}, // the handler's read (with its buffer) and the bound
+	} {
+		body := &countingReader{r: strings.NewReader(strings.Repeat("x", tc.size))}
+		h := limitBody(16)(http.HandlerFunc(func(w http.ResponseWriter, r *http.Request) {
+			_, err := io.ReadAll(r.Body)
+			w.WriteHeader(optics413(err))
+		}))
+		rec := httptest.NewRecorder()
+		h.ServeHTTP(rec, httptest.NewRequest(http.MethodPost, "/", body))
+		if rec.Code != http.StatusRequestEntityTooLarge {
+			t.Errorf("%d bytes: status %d, want 413", tc.size, rec.Code)
+		}
+		if body.n > tc.want || (tc.size < maxDrainBytes && body.n != tc.size) || body.n < maxDrainBytes && tc.size > maxDrainBytes {
+			t.Errorf("%d bytes: %d read, want at most %d and all of a rest below %d", tc.size, body.n, tc.want, maxDrainBytes)
+		}
+	}
+}

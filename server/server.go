@@ -2,6 +2,7 @@ package server
 
 import (
 	"bytes"
+	"cmp"
 	"io"
 	"log/slog"
 	"net/http"
@@ -47,6 +48,9 @@ type Config struct {
 	// get 421 (mw_hosts.go). Empty means the loopback names only; `raytable serve` adds the listen
 	// address's host (DefaultAllowedHosts).
 	AllowedHosts []string
+	// WritesPerMinute is how many revisions one client address may store a minute (bursts of 20);
+	// 0 means the default, DefaultWritesPerMinute; a negative value sets no limit.
+	WritesPerMinute int
 }
 
 // Server answers raytable's web requests.
@@ -60,6 +64,7 @@ type Server struct {
 	// analyze computes a report; the cache keeps it for stored revisions (compute.go).
 	analyze func(*optics.Bench) (*optics.Report, error)
 	cache   *revCache
+	writes  *writeLimiter // nil: no limit
 }
 
 // New builds a server and its routes.
@@ -83,6 +88,9 @@ func New(cfg Config) *Server {
 	if len(s.hosts) == 0 {
 		s.hosts = loopbackHosts
 	}
+	if perMinute := cmp.Or(cfg.WritesPerMinute, DefaultWritesPerMinute); perMinute > 0 {
+		s.writes = newWriteLimiter(perMinute, s.now)
+	}
 	s.router = s.routes()
 	return s
 }
@@ -94,9 +102,9 @@ func (s *Server) routes() chi.Router {
 	r := chi.NewRouter()
 	// GetHead answers HEAD on every GET route, for link checkers and curl -I.
 	// The Host and origin checks come before any handler, so a refused request reads and stores
-	// nothing.
+	// nothing; the write limit comes after them, so a refused request costs the client nothing.
 	r.Use(logRequests(s.log), securityHeaders, recoverPanics(s.log, s.failStatus), checkHosts(s.hosts, s.fail), sameOrigin(s.fail),
-		limitBody(maxBodyBytes), middleware.GetHead,
+		limitBody(maxBodyBytes), s.limitWrites(s.writes), middleware.GetHead,
 		// Pages, drawings and reports are text that shrinks five- to tenfold; a shared link
 		// opens fast on a slow lab network.
 		middleware.Compress(5, "text/html", "image/svg+xml", "application/json", "text/css", "text/javascript", "application/javascript"))
@@ -181,7 +189,9 @@ func (s *Server) render(w http.ResponseWriter, r *http.Request, status int, c te
 // fail answers an error with its status and an error page; internal errors are logged.
 func (s *Server) fail(w http.ResponseWriter, r *http.Request, err error) {
 	status := statusOf(err)
-	if status >= 500 {
+	if storeRefusal(err) {
+		s.log.Warn("store refused a write", "method", r.Method, "path", r.URL.Path, "err", err)
+	} else if status >= 500 {
 		s.log.Error("request failed", "method", r.Method, "path", r.URL.Path, "err", err)
 	}
 	s.render(w, r, status, view.Error(errorPage(status, err)))

@@ -5,9 +5,11 @@ import (
 	"errors"
 	"flag"
 	"fmt"
+	"io/fs"
 	"log/slog"
 	"net"
 	"net/http"
+	"syscall"
 	"time"
 
 	"raytable/server"
@@ -18,6 +20,7 @@ import (
 const (
 	defaultAddr     = "127.0.0.1:8080"
 	defaultStore    = "raytable.db"
+	defaultStoreMB  = 1024
 	shutdownTimeout = 10 * time.Second
 )
 
@@ -30,8 +33,11 @@ func runServe(ctx context.Context, e env) int {
 	storePath := fs.String("store", envOr(e, "RAYTABLE_STORE", defaultStore), "file that holds the designs (environment RAYTABLE_STORE)")
 	hostList := fs.String("allowed-hosts", envOr(e, "RAYTABLE_ALLOWED_HOSTS", ""),
 		"comma-separated host names the server answers for, with any port; default the --addr host, localhost, 127.0.0.1 and [::1] (environment RAYTABLE_ALLOWED_HOSTS)")
+	maxStoreMB := fs.Int64("max-store-mb", defaultStoreMB, "largest the store may grow, in MiB; past it saving answers 507 and viewing goes on (0: no limit)")
+	readOnly := fs.Bool("read-only", false, "serve the store without writing to it; saving answers 503")
+	writesPerMinute := fs.Int("writes-per-minute", server.DefaultWritesPerMinute, "designs one client address may save a minute, in bursts of up to 20 (0 or less: no limit)")
 	fs.Usage = func() {
-		fmt.Fprintln(e.stderr, "usage: raytable [serve] [--addr HOST:PORT] [--store FILE] [--allowed-hosts NAME,...]")
+		fmt.Fprintln(e.stderr, "usage: raytable [serve] [--addr HOST:PORT] [--store FILE] [--max-store-mb N] [--read-only] [--writes-per-minute N] [--allowed-hosts NAME,...]")
 		fs.PrintDefaults()
 	}
 	if err := fs.Parse(e.args); err != nil {
@@ -52,7 +58,7 @@ func runServe(ctx context.Context, e env) int {
 		fmt.Fprintf(e.stderr, "raytable: cannot listen on %s: %v\n", *addr, err)
 		return exitInternal
 	}
-	st, err := store.OpenBolt(*storePath)
+	st, err := openStore(*storePath, store.BoltOptions{MaxBytes: *maxStoreMB << 20, ReadOnly: *readOnly}, log)
 	if err != nil {
 		ln.Close()
 		fmt.Fprintf(e.stderr, "raytable: %v\n", err)
@@ -60,7 +66,10 @@ func runServe(ctx context.Context, e env) int {
 	}
 	defer st.Close()
 	hosts := allowedHosts(*hostList, *addr)
-	srv := server.HTTPServer(server.New(server.Config{Store: st, Logger: log, AllowedHosts: hosts}), log)
+	if *writesPerMinute <= 0 {
+		*writesPerMinute = -1 // server.Config: negative is no limit, 0 the default
+	}
+	srv := server.HTTPServer(server.New(server.Config{Store: st, Logger: log, AllowedHosts: hosts, WritesPerMinute: *writesPerMinute}), log)
 	fmt.Fprintf(e.stdout, "raytable is serving at http://%s/ (designs in %s); press Ctrl+C to stop\n", ln.Addr(), *storePath)
 
 	done := make(chan error, 1)
@@ -93,6 +102,28 @@ func allowedHosts(list, addr string) []string {
 		return hosts
 	}
 	return server.DefaultAllowedHosts(addr)
+}
+
+// openStore opens the store for writing, or read-only when asked. A store file that cannot be
+// opened for writing (no permission, a read-only file system) is still served, read-only, with
+// a log line saying why: the designs in it stay viewable.
+func openStore(path string, opt store.BoltOptions, log *slog.Logger) (*store.Bolt, error) {
+	st, err := store.OpenBoltWith(path, opt)
+	if err == nil || opt.ReadOnly || !cannotWrite(err) {
+		return st, err
+	}
+	opt.ReadOnly = true
+	ro, roErr := store.OpenBoltWith(path, opt)
+	if roErr != nil {
+		return nil, err
+	}
+	log.Warn("serving the store read-only: it cannot be opened for writing", "store", path, "err", err)
+	return ro, nil
+}
+
+// cannotWrite reports whether opening failed for want of write access rather than of the file.
+func cannotWrite(err error) bool {
+	return errors.Is(err, fs.ErrPermission) || errors.Is(err, syscall.EROFS)
 }
 
 func envOr(e env, key, def string) string {

@@ -24,19 +24,39 @@ var (
 // read-write transactions: a revision and its index entry are written together or not at all, so a
 // crash never leaves half a design behind.
 type Bolt struct {
-	db *bolt.DB
+	db       *bolt.DB
+	maxBytes int64 // 0: no limit
+	readOnly bool
 }
 
-// OpenBolt opens (or creates) the store file at path. It waits at most one second for a file lock
-// held by another process, so a second server on the same file fails instead of hanging.
-func OpenBolt(path string) (*Bolt, error) {
-	db, err := bolt.Open(path, 0o600, &bolt.Options{Timeout: time.Second})
+// BoltOptions are the limits of a Bolt store.
+type BoltOptions struct {
+	// MaxBytes is the largest the store may grow: a write that would take it past this is refused
+	// with EFull, and reads go on. 0 means no limit.
+	MaxBytes int64
+	// ReadOnly opens the file for reading only (a shared lock; the file is never created or
+	// changed); every Put is refused with EReadOnly.
+	ReadOnly bool
+}
+
+// OpenBolt opens (or creates) the store file at path, without limits.
+func OpenBolt(path string) (*Bolt, error) { return OpenBoltWith(path, BoltOptions{}) }
+
+// OpenBoltWith opens the store file at path with the given limits. It waits at most one second
+// for a file lock held by another process, so a second server on the same file fails instead of
+// hanging.
+func OpenBoltWith(path string, opt BoltOptions) (*Bolt, error) {
+	db, err := bolt.Open(path, 0o600, &bolt.Options{Timeout: time.Second, ReadOnly: opt.ReadOnly})
 	if errors.Is(err, berrors.ErrTimeout) {
 		// bbolt says only "timeout"; the cause is nearly always a second server on the same file.
 		return nil, fmt.Errorf("open store %s: the file is locked by another process (is another raytable serving it? stop it or choose another --store): %w", path, err)
 	}
 	if err != nil {
 		return nil, fmt.Errorf("open store %s: %w", path, err)
+	}
+	s := &Bolt{db: db, maxBytes: opt.MaxBytes, readOnly: opt.ReadOnly}
+	if opt.ReadOnly {
+		return s, nil // a file no server prepared has no buckets: it reads as empty
 	}
 	err = db.Update(func(tx *bolt.Tx) error {
 		for _, name := range [][]byte{bucketRevisions, bucketByTime} {
@@ -50,7 +70,17 @@ func OpenBolt(path string) (*Bolt, error) {
 		db.Close()
 		return nil, fmt.Errorf("prepare store %s: %w", path, err)
 	}
-	return &Bolt{db: db}, nil
+	return s, nil
+}
+
+// ReadOnly reports whether the store refuses every write.
+func (s *Bolt) ReadOnly() bool { return s.readOnly }
+
+// Size is the store's size in bytes, as its size limit counts it.
+func (s *Bolt) Size() (int64, error) {
+	var n int64
+	err := s.db.View(func(tx *bolt.Tx) error { n = tx.Size(); return nil })
+	return n, err
 }
 
 // Close releases the file.
@@ -58,6 +88,9 @@ func (s *Bolt) Close() error { return s.db.Close() }
 
 // Put stores a new revision and its time index entry in one transaction; an existing id is an error.
 func (s *Bolt) Put(rev Revision) error {
+	if s.readOnly {
+		return optics.Errorf(EReadOnly, "the store is read-only: designs can be viewed but not saved")
+	}
 	if err := checkPut(rev); err != nil {
 		return err
 	}
@@ -66,6 +99,10 @@ func (s *Bolt) Put(rev Revision) error {
 		return err
 	}
 	return s.db.Update(func(tx *bolt.Tx) error {
+		// The record, its index entry and their keys, twice over for the pages bbolt copies on write.
+		if need := 2 * int64(len(data)+2*len(rev.ID)+8); s.maxBytes > 0 && tx.Size()+need > s.maxBytes {
+			return optics.Errorf(EFull, "the store holds %d bytes and may grow to %d bytes (--max-store-mb): no more designs can be saved here; ask whoever runs this server", tx.Size(), s.maxBytes)
+		}
 		revs := tx.Bucket(bucketRevisions)
 		if revs.Get([]byte(rev.ID)) != nil {
 			return exists(rev.ID)
@@ -81,7 +118,11 @@ func (s *Bolt) Put(rev Revision) error {
 func (s *Bolt) Get(id string) (Revision, error) {
 	var rev Revision
 	err := s.db.View(func(tx *bolt.Tx) error {
-		data := tx.Bucket(bucketRevisions).Get([]byte(id))
+		revs := tx.Bucket(bucketRevisions)
+		if revs == nil {
+			return notFound(id)
+		}
+		data := revs.Get([]byte(id))
 		if data == nil {
 			return notFound(id)
 		}
@@ -98,8 +139,11 @@ func (s *Bolt) Get(id string) (Revision, error) {
 func (s *Bolt) Recent(n int) ([]Revision, error) {
 	var out []Revision
 	err := s.db.View(func(tx *bolt.Tx) error {
-		revs := tx.Bucket(bucketRevisions)
-		c := tx.Bucket(bucketByTime).Cursor()
+		revs, byTime := tx.Bucket(bucketRevisions), tx.Bucket(bucketByTime)
+		if revs == nil || byTime == nil {
+			return nil
+		}
+		c := byTime.Cursor()
 		for k, id := c.Last(); k != nil && (n < 0 || len(out) < n); k, id = c.Prev() {
 			rev, err := readRecord(revs.Get(id))
 			if err != nil {
@@ -116,7 +160,9 @@ func (s *Bolt) Recent(n int) ([]Revision, error) {
 func (s *Bolt) Count() (int, error) {
 	var n int
 	err := s.db.View(func(tx *bolt.Tx) error {
-		n = tx.Bucket(bucketRevisions).Stats().KeyN
+		if revs := tx.Bucket(bucketRevisions); revs != nil {
+			n = revs.Stats().KeyN
+		}
 		return nil
 	})
 	return n, err

@@ -4,6 +4,7 @@ import (
 	"crypto/rand"
 	"encoding/base32"
 	"encoding/json"
+	"fmt"
 	"io"
 	"regexp"
 	"time"
@@ -53,6 +54,12 @@ func exists(id string) error {
 	return optics.Errorf(optics.EInternal, "revision %s already exists; revisions never change", id)
 }
 
+// Codes of the store's refusals to write; the server answers them 507 and 503 (server/errors.go).
+const (
+	EFull     = "store_full" // the store has reached its size limit, or its disk is full
+	EReadOnly = "read_only"  // the store was opened read-only
+)
+
 func checkPut(rev Revision) error {
 	if !ValidID(rev.ID) {
 		return optics.Errorf(optics.EInternal, "revision id %q is not a valid id", rev.ID)
@@ -62,6 +69,13 @@ func checkPut(rev Revision) error {
 	}
 	if len(rev.Bench) == 0 {
 		return optics.Errorf(optics.EInternal, "revision %s has no bench", rev.ID)
+	}
+	// What is stored must read back: a bench file above the decoder's limit would be kept and then
+	// refused by every route that shows it. Refuse it now, as the rule it breaks.
+	if len(rev.Bench) > optics.MaxBenchBytes {
+		return optics.Invalid([]optics.Problem{{Message: fmt.Sprintf(
+			"the bench file would be %d bytes; a stored bench holds at most %d bytes (1 MiB): remove elements or explicit rays",
+			len(rev.Bench), optics.MaxBenchBytes)}})
 	}
 	// A record embeds the bench as it is (record.go): it must be a JSON object from its first byte.
 	if rev.Bench[0] != '{' || !json.Valid(rev.Bench) {
