@@ -151,7 +151,7 @@ func TestCacheEvictsBeyondBound(t *testing.T) {
 }
 
 func TestRevCacheOrder(t *testing.T) {
-	c := newRevCache(2)
+	c := newRevCache(2, defaultCacheBytes)
 	ea := c.entry("a")
 	c.entry("b")
 	if c.entry("a") != ea {
@@ -162,7 +162,7 @@ func TestRevCacheOrder(t *testing.T) {
 		t.Errorf("after a, b, a, c with bound 2: a=%v b=%v c=%v len=%d, want a and c", c.has("a"), c.has("b"), c.has("c"), c.len())
 	}
 	for _, max := range []int{0, -1} {
-		none := newRevCache(max)
+		none := newRevCache(max, defaultCacheBytes)
 		none.entry("a")
 		if none.len() != 0 || none.has("a") {
 			t.Errorf("bound %d kept an entry", max)
@@ -171,7 +171,7 @@ func TestRevCacheOrder(t *testing.T) {
 }
 
 func TestMemoKeepsValuesNotErrors(t *testing.T) {
-	c := newRevCache(4)
+	c := newRevCache(4, defaultCacheBytes)
 	calls := 0
 	fail := errors.New("boom")
 	compute := func() (int, error) {

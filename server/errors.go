@@ -18,12 +18,14 @@ const (
 // statusByCode is the one table from error codes to HTTP statuses. A bad import body is the
 // exception: it answers 400 (see importBench), since the request itself is what is wrong.
 var statusByCode = map[string]int{
-	optics.EInvalid:  http.StatusUnprocessableEntity,
-	optics.ENotFound: http.StatusNotFound,
-	optics.ETooLarge: http.StatusRequestEntityTooLarge,
-	optics.EInternal: http.StatusInternalServerError,
-	eBadRequest:      http.StatusBadRequest,
-	eUnsupported:     http.StatusUnsupportedMediaType,
+	optics.EInvalid:    http.StatusUnprocessableEntity,
+	optics.ENotFound:   http.StatusNotFound,
+	optics.ETooLarge:   http.StatusRequestEntityTooLarge,
+	optics.EInternal:   http.StatusInternalServerError,
+	optics.EOverBudget: http.StatusUnprocessableEntity,
+	optics.EDeadline:   http.StatusServiceUnavailable,
+	eBadRequest:        http.StatusBadRequest,
+	eUnsupported:       http.StatusUnsupportedMediaType,
 }
 
 // statusOf maps an error to its status; anything not an *optics.Error is internal.
@@ -51,7 +53,8 @@ func errorPage(status int, err error) view.ErrorPage {
 	if p.Title == "" {
 		p.Title = http.StatusText(status)
 	}
-	if status >= 500 {
+	// Only internal failures hide their message; a deadline (503) says what to reduce.
+	if status >= 500 && optics.ErrorCode(err) == optics.EInternal {
 		p.Message = "The failure has been logged. Please try again, or go back to the start page."
 		return p
 	}

@@ -13,7 +13,6 @@ import (
 	"github.com/go-chi/chi/v5/middleware"
 
 	"raytable/optics"
-	"raytable/optics/analysis"
 	"raytable/server/store"
 	"raytable/web/static"
 	"raytable/web/view"
@@ -39,6 +38,12 @@ type Config struct {
 	// CacheEntries is how many stored revisions keep their computed report, drawings and numbers
 	// (least recently used forgotten first). 0 means the default, 64; a negative value keeps none.
 	CacheEntries int
+	// CacheBytes bounds the estimated bytes of the kept results as well (least recently used
+	// forgotten first). 0 means the default, 256 MiB; a negative value keeps none.
+	CacheBytes int64
+	// ComputeDeadline is how long computing one report may take before the request is answered
+	// 503 (optics.EDeadline). 0 means the default, 5 s.
+	ComputeDeadline time.Duration
 	// Analyze computes the report of a bench that has passed Validate; default analysis.RunValid,
 	// as the server computes no other (a stored revision passed before it was saved, a preview
 	// just before). Tests count calls through it.
@@ -53,8 +58,9 @@ type Server struct {
 	random io.Reader
 	router chi.Router
 	// analyze computes a report; the cache keeps it for stored revisions (compute.go).
-	analyze func(*optics.Bench) (*optics.Report, error)
-	cache   *revCache
+	analyze  func(*optics.Bench) (*optics.Report, error)
+	cache    *revCache
+	deadline time.Duration // of each computation (compute.go)
 }
 
 // New builds a server and its routes.
@@ -66,14 +72,21 @@ func New(cfg Config) *Server {
 	if s.now == nil {
 		s.now = time.Now
 	}
-	if s.analyze == nil {
-		s.analyze = func(b *optics.Bench) (*optics.Report, error) { return analysis.RunValid(b), nil }
+	s.deadline = cfg.ComputeDeadline
+	if s.deadline <= 0 {
+		s.deadline = defaultComputeDeadline
 	}
-	entries := cfg.CacheEntries
+	if s.analyze == nil {
+		s.analyze = s.analyzeWithin
+	}
+	entries, bytes := cfg.CacheEntries, cfg.CacheBytes
 	if entries == 0 {
 		entries = defaultCacheEntries
 	}
-	s.cache = newRevCache(entries)
+	if bytes == 0 {
+		bytes = defaultCacheBytes
+	}
+	s.cache = newRevCache(entries, bytes)
 	s.router = s.routes()
 	return s
 }
