@@ -20,4 +20,4 @@ const (
 // fields. Each ray-face is also a hit in the report, its JSON and the drawings, so the budget
 // bounds time and memory alike. Sized by BenchmarkLargestAllowedBench (optics/analysis): a bench
 // at the budget computes and renders in about a second on two cores, in well under 200 MB.
-const MaxRayFaces = 400_000
+const MaxRayFaces = 40_000
