@@ -99,3 +99,34 @@ func BenchmarkLargestAllowedBench(b *testing.B) {
 	}
 }
 
+// TestComputeLimits: through the server, a bench over the work budget answers 422 with the
+// budget's message, and a heavy bench past a 1 ms deadline 503 with a message saying what to
+// reduce; the server goes on answering.
+func TestComputeLimits(t *testing.T) {
+	ts := newTestServerWith(t, Config{ComputeDeadline: time.Millisecond})
+	heavy := largestBenches[0] // 24,576 rays: a deadline check every fan
+	heavyID := redirectID(t, ts.do(t, http.MethodPost, "/import",
+		strings.NewReader(wideBench(heavy.fields, heavy.wavelengths, budgetFan(heavy.fields, heavy.wavelengths, heavy.group), heavy.group)), "application/json"))
+	overID := redirectID(t, ts.do(t, http.MethodPost, "/import", strings.NewReader(wideBench(16, 16, 201, 3)), "application/json"))
+	cases := []struct {
+		target string
+		status int
+		want   string
+	}{
+		{"/r/" + overID, http.StatusUnprocessableEntity, "at most 40,000 are allowed"},
+		{"/r/" + overID + "/report.json", http.StatusUnprocessableEntity, "fewer field angles"},
+		{"/r/" + heavyID, http.StatusServiceUnavailable, "took longer than raytable allows"},
+		{"/r/" + heavyID + "/side.svg", http.StatusServiceUnavailable, "fewer field angles"},
+		{"/r/" + heavyID + "/bench.json", http.StatusOK, `"title": "wide"`},
+		{"/", http.StatusOK, "demo"},
+	}
+	for _, tc := range cases {
+		rec := ts.get(t, tc.target)
+		if rec.Code != tc.status || !strings.Contains(rec.Body.String(), tc.want) {
+			t.Errorf("GET %s: %d, want %d with %q; body %s", tc.target, rec.Code, tc.status, tc.want, truncate(rec.Body.String(), 300))
+		}
+	}
+	if got := ts.cache.size(); got != 2*benchBytes {
+		t.Errorf("the cache holds %d bytes, want %d: the two decoded benches, no failed computation", got, 2*benchBytes)
+	}
+}

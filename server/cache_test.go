@@ -4,6 +4,7 @@ import (
 	"bytes"
 	"errors"
 	"net/http"
+	"runtime"
 	"sync"
 	"sync/atomic"
 	"testing"
@@ -220,5 +221,60 @@ func TestCacheConcurrentRequests(t *testing.T) {
 	wg.Wait()
 	if got := cs.calls.Load(); got != 2 {
 		t.Errorf("two revisions under concurrent load analysed %d times, want 2", got)
+	}
+}
+
+// TestCacheByteBound: the cache forgets the least recently used revisions once the estimated
+// bytes pass its bound, and keeps no revision whose values alone pass it.
+func TestCacheByteBound(t *testing.T) {
+	c := newRevCache(10, 1000)
+	put := func(id string, n int) {
+		if _, err := memo(c, id, artifact{kind: artReportJSON}, func() ([]byte, error) { return make([]byte, n), nil }); err != nil {
+			t.Fatal(err)
+		}
+	}
+	steps := []struct {
+		id    string
+		bytes int
+		kept  []string
+		size  int64
+	}{
+		{"a", 400, []string{"a"}, 400},
+		{"b", 400, []string{"a", "b"}, 800},
+		{"c", 400, []string{"b", "c"}, 800}, // 1200 > 1000: a, the least recently used, goes
+		{"d", 1001, []string{}, 0},          // larger than the bound alone: nothing else can stay beside it
+		{"e", 1000, []string{"e"}, 1000},
+	}
+	for _, s := range steps {
+		put(s.id, s.bytes)
+		for _, id := range s.kept {
+			if !c.has(id) {
+				t.Errorf("after %s: %s was forgotten", s.id, id)
+			}
+		}
+		if c.len() != len(s.kept) || c.size() != s.size {
+			t.Errorf("after %s: %d entries of %d bytes, want %d of %d", s.id, c.len(), c.size(), len(s.kept), s.size)
+		}
+	}
+}
+
+// TestCacheSizeEstimate compares the estimate of a report's bytes with the heap it takes, on a
+// bench at the work budget (measured; the estimate is to bound memory, so it must not fall far
+// below the truth, nor lie far above it).
+func TestCacheSizeEstimate(t *testing.T) {
+	tc := largestBenches[1]
+	b := decodeOrFail(t, wideBench(tc.fields, tc.wavelengths, budgetFan(tc.fields, tc.wavelengths, tc.group), tc.group))
+	var before, after runtime.MemStats
+	runtime.GC()
+	runtime.ReadMemStats(&before)
+	rep := analysis.RunValid(b)
+	runtime.GC()
+	runtime.ReadMemStats(&after)
+	runtime.KeepAlive(rep)
+	measured := int64(after.HeapAlloc) - int64(before.HeapAlloc)
+	estimate := sizeOf(rep)
+	t.Logf("report of %d ray-faces: estimate %d bytes, heap %d bytes", analysis.RayFaces(b), estimate, measured)
+	if estimate < measured*2/3 || estimate > measured*2 {
+		t.Errorf("estimate %d bytes, measured %d: not within -33%%/+100%%", estimate, measured)
 	}
 }
