@@ -18,6 +18,8 @@ const (
 // MaxRayFaces is the work budget of one report: the ray-faces it may trace, each exact ray (with
 // its paraxial twin) through each face of its arm's path, summed over all arms, wavelengths and
 // fields. Each ray-face is also a hit in the report, its JSON and the drawings, so the budget
-// bounds time and memory alike. Sized by BenchmarkLargestAllowedBench (optics/analysis): a bench
-// at the budget computes and renders in about a second on two cores, in well under 200 MB.
-const MaxRayFaces = 40_000
+// bounds time and memory alike; the indented report JSON, about 1 KB per ray-face, costs the
+// most. Sized by BenchmarkLargestAllowedBench (server): one view of a bench at the budget (page,
+// report JSON and drawings, each computed afresh) takes under a second on two cores and under
+// 200 MB.
+const MaxRayFaces = 25_000

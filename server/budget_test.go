@@ -113,7 +113,7 @@ func TestComputeLimits(t *testing.T) {
 		status int
 		want   string
 	}{
-		{"/r/" + overID, http.StatusUnprocessableEntity, "at most 40,000 are allowed"},
+		{"/r/" + overID, http.StatusUnprocessableEntity, "at most 25,000 are allowed"},
 		{"/r/" + overID + "/report.json", http.StatusUnprocessableEntity, "fewer field angles"},
 		{"/r/" + heavyID, http.StatusServiceUnavailable, "took longer than raytable allows"},
 		{"/r/" + heavyID + "/side.svg", http.StatusServiceUnavailable, "fewer field angles"},

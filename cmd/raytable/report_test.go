@@ -198,7 +198,7 @@ func TestExitCodes(t *testing.T) {
 		{"valid", nil, []string{"report", demoBench}, exitOK, ""},
 		{"missing file", nil, []string{"report", filepath.Join(dir, "none.json")}, exitInvalid, "no such file"},
 		{"over a cap", nil, []string{"report", overCap}, exitInvalid, "wavelengths_nm: has 17 wavelengths; at most 16 are allowed"},
-		{"over the budget", nil, []string{"plan", overBudget}, exitInvalid, "at most 40,000 are allowed: use fewer field angles"},
+		{"over the budget", nil, []string{"plan", overBudget}, exitInvalid, "at most 25,000 are allowed: use fewer field angles"},
 		{"standard input breaks", failingReader{}, []string{"report", "-"}, exitInternal, "device gone"},
 	}
 	for _, tc := range cases {

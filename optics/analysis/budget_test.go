@@ -59,7 +59,7 @@ func TestBudget(t *testing.T) {
 	if optics.ErrorCode(err) != optics.EOverBudget {
 		t.Fatalf("over the budget: %v (code %s), want %s", err, optics.ErrorCode(err), optics.EOverBudget)
 	}
-	for _, want := range []string{"514,570 ray-faces", "at most 40,000", "fewer field angles"} {
+	for _, want := range []string{"514,570 ray-faces", "at most 25,000", "fewer field angles"} {
 		if !strings.Contains(err.Error(), want) {
 			t.Errorf("message %q lacks %q", err, want)
 		}
