@@ -5,9 +5,6 @@ import "math"
 // FormatBenchV1 is the value of Bench.Format for version 1 of the bench file.
 const FormatBenchV1 = "raytable/bench/v1"
 
-// MaxElements is the largest number of elements a bench may hold.
-const MaxElements = 200
-
 // Element types.
 const (
 	TypeLens       = "lens"        // one or more refracting faces with glass between them

@@ -15,6 +15,9 @@ const (
 	ENotFound = "not_found" // a stored design does not exist
 	ETooLarge = "too_large" // the input is larger than raytable accepts
 	EInternal = "internal"  // a bug or an environment failure
+
+	EOverBudget = "over_budget" // the bench is valid but would cost more work than one report may (MaxRayFaces)
+	EDeadline   = "deadline"    // computing took longer than the request allows
 )
 
 // Problem is one broken rule, at a JSON path such as "elements[2].faces_mm[0]".

@@ -1,11 +1,5 @@
 package optics
 
-// Limits of a branching bench (README "Bench file": splitter, more_sources).
-const (
-	MaxArmDepth = 8 // deepest nesting of reflected lists: a splitter's list inside another's, ...
-	MaxSources  = 8 // most further sources (more_sources entries)
-)
-
 // ArmMain is the id of the first source's own element list.
 const ArmMain = "main"
 

@@ -18,7 +18,6 @@ const (
 	MaxWavelengthNM = 20000.0 // longest accepted wavelength
 	MaxLengthMM     = 1e6     // largest accepted magnitude of any length; more is a slip, not a bench
 	MinLengthMM     = 1e-6    // smallest non-zero magnitude of any length (1 nm); less is a slip and overflows 1/x
-	MaxFanRays      = 201     // most rays in one meridional fan
 	MaxIDLength     = 40      // longest element id
 	MaxTitleLength  = 200     // longest title, in characters
 	MaxNotesLength  = 4000    // longest notes, in characters
@@ -133,11 +132,19 @@ func (v *checker) angle(path string, deg float64) {
 	}
 }
 
+// most reports a list at path that is longer than its cap (optics/limits.go), naming what it holds.
+func (v *checker) most(path string, n, max int, what string) {
+	if n > max {
+		v.add(path, "has %d %s; at most %d are allowed", n, what, max)
+	}
+}
+
 func (v *checker) wavelengths() {
 	if len(v.b.WavelengthsNM) == 0 {
 		v.add("wavelengths_nm", "at least one wavelength is required")
 		return
 	}
+	v.most("wavelengths_nm", len(v.b.WavelengthsNM), MaxWavelengths, "wavelengths")
 	for i, w := range v.b.WavelengthsNM {
 		p := index("wavelengths_nm", i)
 		if v.finite(p, w) && (w < MinWavelengthNM || w > MaxWavelengthNM) {
@@ -196,6 +203,7 @@ func (v *checker) sourceAt(path string, s *Source) {
 	if s.FanRays != nil && (*s.FanRays < 1 || *s.FanRays > MaxFanRays) {
 		v.add(at("fan_rays"), "must be between 1 and %d rays, got %d", MaxFanRays, *s.FanRays)
 	}
+	v.most(at("rays"), len(s.Rays), MaxExplicitRays, "explicit rays")
 	for i, r := range s.Rays {
 		p := index(at("rays"), i)
 		v.length(field(p, "height_mm"), r.HeightMM)
@@ -222,6 +230,7 @@ func (v *checker) collimated(path string, s *Source) {
 	if s.SemiDiameterMM != nil {
 		v.positive(field(path, "semi_diameter_mm"), *s.SemiDiameterMM)
 	}
+	v.most(field(path, "field_angles_deg"), len(s.FieldAnglesDeg), MaxFieldAngles, "field angles")
 	for i, a := range s.FieldAnglesDeg {
 		v.angle(index(field(path, "field_angles_deg"), i), a)
 	}
@@ -232,6 +241,7 @@ func (v *checker) pointSource(path string, s *Source) {
 	if s.NA != nil && v.finite(field(path, "na"), *s.NA) && (*s.NA <= 0 || *s.NA >= 1) {
 		v.add(field(path, "na"), "numerical aperture %s must lie strictly between 0 and 1", fmtNum(*s.NA))
 	}
+	v.most(field(path, "object_heights_mm"), len(s.ObjectHeightsMM), MaxObjectHeights, "object heights")
 	for i, h := range s.ObjectHeightsMM {
 		v.length(index(field(path, "object_heights_mm"), i), h)
 	}

@@ -117,9 +117,7 @@ func (v *checker) passGeometry() {
 // moreSources checks the further sources: how many, their ids, their source fields by kind and
 // their wavelengths. Their elements are checked with the tree.
 func (v *checker) moreSources() {
-	if n := len(v.b.MoreSources); n > MaxSources {
-		v.add("more_sources", "has %d further sources; at most %d are allowed", n, MaxSources)
-	}
+	v.most("more_sources", len(v.b.MoreSources), MaxSources, "further sources")
 	seen := map[string]int{}
 	for i := range v.b.MoreSources {
 		m := &v.b.MoreSources[i]
@@ -141,6 +139,7 @@ func (v *checker) moreSources() {
 			seen[m.ID] = i
 		}
 		v.sourceAt(p, &m.Source)
+		v.most(field(p, "wavelengths_nm"), len(m.WavelengthsNM), MaxWavelengths, "wavelengths")
 		for k, w := range m.WavelengthsNM {
 			wp := index(field(p, "wavelengths_nm"), k)
 			if v.finite(wp, w) && (w < MinWavelengthNM || w > MaxWavelengthNM) {

@@ -22,6 +22,9 @@ func (v *checker) elements() {
 	case total > MaxElements:
 		v.add("elements", "the bench has %d elements over all its lists; at most %d are allowed", total, MaxElements)
 	}
+	if len(lists) > MaxElementLists {
+		v.add("elements", "the bench has %d element lists; at most %d are allowed (the main list, each reflected list and each further source's list)", len(lists), MaxElementLists)
+	}
 	v.moreSources()
 	firstUse := map[string]string{}
 	for _, ms := range v.b.MoreSources {

@@ -4,6 +4,7 @@ import (
 	"bytes"
 	"errors"
 	"net/http"
+	"runtime"
 	"sync"
 	"sync/atomic"
 	"testing"
@@ -152,7 +153,7 @@ func TestCacheEvictsBeyondBound(t *testing.T) {
 }
 
 func TestRevCacheOrder(t *testing.T) {
-	c := newRevCache(2)
+	c := newRevCache(2, defaultCacheBytes)
 	ea := c.entry("a")
 	c.entry("b")
 	if c.entry("a") != ea {
@@ -163,7 +164,7 @@ func TestRevCacheOrder(t *testing.T) {
 		t.Errorf("after a, b, a, c with bound 2: a=%v b=%v c=%v len=%d, want a and c", c.has("a"), c.has("b"), c.has("c"), c.len())
 	}
 	for _, max := range []int{0, -1} {
-		none := newRevCache(max)
+		none := newRevCache(max, defaultCacheBytes)
 		none.entry("a")
 		if none.len() != 0 || none.has("a") {
 			t.Errorf("bound %d kept an entry", max)
@@ -172,7 +173,7 @@ func TestRevCacheOrder(t *testing.T) {
 }
 
 func TestMemoKeepsValuesNotErrors(t *testing.T) {
-	c := newRevCache(4)
+	c := newRevCache(4, defaultCacheBytes)
 	calls := 0
 	fail := errors.New("boom")
 	compute := func() (int, error) {
@@ -221,5 +222,67 @@ func TestCacheConcurrentRequests(t *testing.T) {
 	wg.Wait()
 	if got := cs.calls.Load(); got != 2 {
 		t.Errorf("two revisions under concurrent load analysed %d times, want 2", got)
+	}
+}
+
+// TestCacheByteBound: the cache forgets the least recently used revisions once the estimated
+// bytes pass its bound, and keeps no revision whose values alone pass it.
+func TestCacheByteBound(t *testing.T) {
+	c := newRevCache(10, 1000)
+	put := func(id string, n int) {
+		if _, err := memo(c, id, artifact{kind: artReportJSON}, func() ([]byte, error) { return make([]byte, n), nil }); err != nil {
+			t.Fatal(err)
+		}
+	}
+	steps := []struct {
+		id    string
+		bytes int
+		kept  []string
+		size  int64
+	}{
+		{"a", 400, []string{"a"}, 400},
+		{"b", 400, []string{"a", "b"}, 800},
+		{"c", 400, []string{"b", "c"}, 800}, // 1200 > 1000: a, the least recently used, goes
+		{"d", 1001, []string{}, 0},          // larger than the bound alone: nothing else can stay beside it
+		{"e", 1000, []string{"e"}, 1000},
+	}
+	for _, s := range steps {
+		put(s.id, s.bytes)
+		for _, id := range s.kept {
+			if !c.has(id) {
+				t.Errorf("after %s: %s was forgotten", s.id, id)
+			}
+		}
+		if c.len() != len(s.kept) || c.size() != s.size {
+			t.Errorf("after %s: %d entries of %d bytes, want %d of %d", s.id, c.len(), c.size(), len(s.kept), s.size)
+		}
+	}
+}
+
+// TestCacheSizeEstimate compares the estimate of a report's bytes with the heap it takes, on a
+// bench at the work budget (measured; the estimate is to bound memory, so it must not fall far
+// below the truth, nor lie far above it).
+func TestCacheSizeEstimate(t *testing.T) {
+	tc := largestBenches[1]
+	b := decodeOrFail(t, wideBench(tc.fields, tc.wavelengths, budgetFan(tc.fields, tc.wavelengths, tc.group), tc.group))
+	// Four reports kept at once, so that what the collector frees of earlier work while they are
+	// computed counts a quarter.
+	const held = 4
+	var before, after runtime.MemStats
+	runtime.GC()
+	runtime.GC()
+	runtime.ReadMemStats(&before)
+	reps := make([]*optics.Report, held)
+	for i := range reps {
+		reps[i] = analysis.RunValid(b)
+	}
+	runtime.GC()
+	runtime.ReadMemStats(&after)
+	runtime.KeepAlive(reps)
+	measured := (int64(after.HeapAlloc) - int64(before.HeapAlloc)) / held
+	estimate := sizeOf(reps[0])
+	t.Logf("report of %d ray-faces: estimate %d bytes, heap %d bytes", analysis.RayFaces(b), estimate, measured)
+	if estimate < measured*2/3 || estimate > measured*2 {
+		t.Errorf("estimate %d bytes, measured %d: not within -33%%/+100%%", estimate, measured)
 	}
 }

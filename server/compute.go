@@ -2,16 +2,35 @@ package server
 
 import (
 	"bytes"
+	"context"
 	"encoding/json"
 	"net/http"
+	"time"
 
 	"github.com/go-chi/chi/v5"
 
 	"raytable/optics"
+	"raytable/optics/analysis"
 	"raytable/server/store"
 	"raytable/web/diagram"
 	"raytable/web/view"
 )
+
+// defaultComputeDeadline is how long one report may take to compute when Config does not say. A
+// bench within the work budget (optics.MaxRayFaces) takes at most about a second on two cores;
+// the deadline is the guard for a machine that is busy or slow.
+const defaultComputeDeadline = 5 * time.Second
+
+// analyzeWithin is the server's analysis: the work budget (an over-budget bench is refused with
+// optics.EOverBudget, 422, before anything is traced), then the computation under the deadline
+// (optics.EDeadline, 503, once it passes). The deadline runs from the start of the computation,
+// not from the request: a cached report serves every later request, so one client leaving does
+// not stop the work another is waiting for.
+func (s *Server) analyzeWithin(b *optics.Bench) (*optics.Report, error) {
+	ctx, cancel := context.WithTimeout(context.Background(), s.deadline)
+	defer cancel()
+	return analysis.RunContext(ctx, b)
+}
 
 // design is one stored revision, decoded.
 type design struct {

@@ -26,17 +26,19 @@ const (
 // well-formed bench that breaks a rule 422 (on /import as on the edit form), too large 413, too
 // many writes 429, a full store 507, a read-only one 503.
 var statusByCode = map[string]int{
-	optics.EInvalid:  http.StatusUnprocessableEntity,
-	optics.ENotFound: http.StatusNotFound,
-	optics.ETooLarge: http.StatusRequestEntityTooLarge,
-	optics.EInternal: http.StatusInternalServerError,
-	eBadRequest:      http.StatusBadRequest,
-	eUnsupported:     http.StatusUnsupportedMediaType,
-	eForbidden:       http.StatusForbidden,
-	eWrongHost:       http.StatusMisdirectedRequest,
-	eRateLimited:     http.StatusTooManyRequests,
-	eStoreFull:       http.StatusInsufficientStorage,
-	eReadOnly:        http.StatusServiceUnavailable,
+	optics.EInvalid:    http.StatusUnprocessableEntity,
+	optics.ENotFound:   http.StatusNotFound,
+	optics.ETooLarge:   http.StatusRequestEntityTooLarge,
+	optics.EInternal:   http.StatusInternalServerError,
+	eBadRequest:        http.StatusBadRequest,
+	eUnsupported:       http.StatusUnsupportedMediaType,
+	eForbidden:         http.StatusForbidden,
+	eWrongHost:         http.StatusMisdirectedRequest,
+	eRateLimited:       http.StatusTooManyRequests,
+	eStoreFull:         http.StatusInsufficientStorage,
+	eReadOnly:          http.StatusServiceUnavailable,
+	optics.EOverBudget: http.StatusUnprocessableEntity,
+	optics.EDeadline:   http.StatusServiceUnavailable,
 }
 
 // statusOf maps an error to its status; anything not an *optics.Error is internal.
@@ -78,7 +80,8 @@ func errorPage(status int, err error) view.ErrorPage {
 	if p.Title == "" {
 		p.Title = http.StatusText(status)
 	}
-	if status >= 500 && !storeRefusal(err) {
+	// Only internal failures hide their message; a deadline (503) says what to reduce.
+	if status >= 500 && optics.ErrorCode(err) == optics.EInternal {
 		p.Message = "The failure has been logged. Please try again, or go back to the start page."
 		return p
 	}

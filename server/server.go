@@ -14,7 +14,6 @@ import (
 	"github.com/go-chi/chi/v5/middleware"
 
 	"raytable/optics"
-	"raytable/optics/analysis"
 	"raytable/server/store"
 	"raytable/web/static"
 	"raytable/web/view"
@@ -40,6 +39,12 @@ type Config struct {
 	// CacheEntries is how many stored revisions keep their computed report, drawings and numbers
 	// (least recently used forgotten first). 0 means the default, 64; a negative value keeps none.
 	CacheEntries int
+	// CacheBytes bounds the estimated bytes of the kept results as well (least recently used
+	// forgotten first). 0 means the default, 256 MiB; a negative value keeps none.
+	CacheBytes int64
+	// ComputeDeadline is how long computing one report may take before the request is answered
+	// 503 (optics.EDeadline). 0 means the default, 5 s.
+	ComputeDeadline time.Duration
 	// Analyze computes the report of a bench that has passed Validate; default analysis.RunValid,
 	// as the server computes no other (a stored revision passed before it was saved, a preview
 	// just before). Tests count calls through it.
@@ -62,9 +67,10 @@ type Server struct {
 	router chi.Router
 	hosts  []string // the Host allow-list
 	// analyze computes a report; the cache keeps it for stored revisions (compute.go).
-	analyze func(*optics.Bench) (*optics.Report, error)
-	cache   *revCache
-	writes  *writeLimiter // nil: no limit
+	analyze  func(*optics.Bench) (*optics.Report, error)
+	cache    *revCache
+	writes   *writeLimiter // nil: no limit
+	deadline time.Duration // of each computation (compute.go)
 }
 
 // New builds a server and its routes.
@@ -76,14 +82,21 @@ func New(cfg Config) *Server {
 	if s.now == nil {
 		s.now = time.Now
 	}
-	if s.analyze == nil {
-		s.analyze = func(b *optics.Bench) (*optics.Report, error) { return analysis.RunValid(b), nil }
+	s.deadline = cfg.ComputeDeadline
+	if s.deadline <= 0 {
+		s.deadline = defaultComputeDeadline
 	}
-	entries := cfg.CacheEntries
+	if s.analyze == nil {
+		s.analyze = s.analyzeWithin
+	}
+	entries, bytes := cfg.CacheEntries, cfg.CacheBytes
 	if entries == 0 {
 		entries = defaultCacheEntries
 	}
-	s.cache = newRevCache(entries)
+	if bytes == 0 {
+		bytes = defaultCacheBytes
+	}
+	s.cache = newRevCache(entries, bytes)
 	s.hosts = cfg.AllowedHosts
 	if len(s.hosts) == 0 {
 		s.hosts = loopbackHosts

@@ -4,6 +4,10 @@ import (
 	"bytes"
 	"context"
 	"encoding/json"
+	"errors"
+	"io"
+	"os"
+	"path/filepath"
 	"strings"
 	"testing"
 )
@@ -142,5 +146,70 @@ func TestPlanCSV(t *testing.T) {
 	}
 	if !strings.HasPrefix(lines[1], "L1,lens,") {
 		t.Errorf("first row = %q", lines[1])
+	}
+}
+
+// failingReader is standard input that breaks while it is read: an environment failure.
+type failingReader struct{}
+
+func (failingReader) Read([]byte) (int, error) { return 0, errors.New("device gone") }
+
+// TestExitCodes: input the user can fix (a missing file, a rule, a cap, the work budget) exits
+// 2 with the message; an environment failure exits 1 (README "Commands").
+func TestExitCodes(t *testing.T) {
+	dir := t.TempDir()
+	demo, err := os.ReadFile(demoBench)
+	if err != nil {
+		t.Fatal(err)
+	}
+	write := func(name string, edit func(b map[string]any)) string {
+		var b map[string]any
+		if err := json.Unmarshal(demo, &b); err != nil {
+			t.Fatal(err)
+		}
+		edit(b)
+		data, _ := json.Marshal(b)
+		p := filepath.Join(dir, name)
+		if err := os.WriteFile(p, data, 0o644); err != nil {
+			t.Fatal(err)
+		}
+		return p
+	}
+	list := func(n int, from, step float64) []any {
+		out := make([]any, n)
+		for i := range out {
+			out[i] = from + step*float64(i)
+		}
+		return out
+	}
+	overCap := write("cap.json", func(b map[string]any) { b["wavelengths_nm"] = list(17, 400, 10) })
+	overBudget := write("budget.json", func(b map[string]any) {
+		b["wavelengths_nm"] = list(16, 400, 10)
+		src := b["source"].(map[string]any)
+		src["field_angles_deg"], src["fan_rays"] = list(16, 0, 0.001), 201
+	})
+	cases := []struct {
+		name  string
+		stdin io.Reader
+		args  []string
+		code  int
+		want  string
+	}{
+		{"valid", nil, []string{"report", demoBench}, exitOK, ""},
+		{"missing file", nil, []string{"report", filepath.Join(dir, "none.json")}, exitInvalid, "no such file"},
+		{"over a cap", nil, []string{"report", overCap}, exitInvalid, "wavelengths_nm: has 17 wavelengths; at most 16 are allowed"},
+		{"over the budget", nil, []string{"plan", overBudget}, exitInvalid, "at most 25,000 are allowed: use fewer field angles"},
+		{"standard input breaks", failingReader{}, []string{"report", "-"}, exitInternal, "device gone"},
+	}
+	for _, tc := range cases {
+		var out, errOut bytes.Buffer
+		stdin := tc.stdin
+		if stdin == nil {
+			stdin = strings.NewReader("")
+		}
+		code := run(context.Background(), tc.args, func(string) string { return "" }, stdin, &out, &errOut)
+		if code != tc.code || !strings.Contains(errOut.String(), tc.want) {
+			t.Errorf("%s: exit %d, want %d with %q; stderr %s", tc.name, code, tc.code, tc.want, errOut.String())
+		}
 	}
 }

@@ -1,6 +1,7 @@
 package analysis
 
 import (
+	"context"
 	"fmt"
 
 	"gonum.org/v1/gonum/spatial/r3"
@@ -14,7 +15,10 @@ import (
 // traceRays traces the explicit rays and the fans exactly, pairs every hit with the paraxial twin
 // of the ray, records the largest ray height at each element, and summarises rays that stopped
 // early as warnings, one per element and status.
-func traceRays(b *optics.Bench, p *optics.Path, places []optics.ElementPlace, tan paraxial.Result) ([]optics.Ray, []optics.Warning) {
+//
+// It stops with the EDeadline error once ctx is done, checked at the start of every fan (and
+// every fanCheck explicit rays).
+func traceRays(ctx context.Context, b *optics.Bench, p *optics.Path, places []optics.ElementPlace, tan paraxial.Result) ([]optics.Ray, []optics.Warning, error) {
 	specs := trace.AimedRays(b, p, fanAim(b, tan))
 	buf := make([]trace.Point, 0, len(p.Surfaces))
 	twin := make([]paraxial.Ray, len(p.Surfaces))
@@ -26,7 +30,12 @@ func traceRays(b *optics.Bench, p *optics.Path, places []optics.ElementPlace, ta
 	stopped := map[stopKey]int{}
 	var stopOrder []stopKey
 
-	for _, spec := range specs {
+	for i, spec := range specs {
+		if i%fanCheck == 0 {
+			if err := deadlineErr(ctx); err != nil {
+				return nil, nil, err
+			}
+		}
 		res := trace.Trace(p, spec.K, spec.Start, buf)
 		twin = paraxial.TraceInto(twin, p, spec.K, paraxial.Tangential, paraxial.Ray{Y: spec.ParaxialY, NU: spec.ParaxialU})
 		ray := optics.Ray{
@@ -80,8 +89,12 @@ func traceRays(b *optics.Bench, p *optics.Path, places []optics.ElementPlace, ta
 			Message: stopMessage(e, k.status, stopped[k], len(specs)),
 		})
 	}
-	return rays, warnings
+	return rays, warnings, nil
 }
+
+// fanCheck is how many rays are traced between two looks at the deadline: at most one fan
+// (optics.MaxFanRays), a fraction of a millisecond.
+const fanCheck = optics.MaxFanRays
 
 // stopCodes is the warning given for rays that end early with each status.
 var stopCodes = map[string]optics.WarningCode{

@@ -1,6 +1,8 @@
 package analysis
 
 import (
+	"context"
+
 	"raytable/optics"
 	"raytable/optics/beam"
 	"raytable/optics/layout"
@@ -29,9 +31,18 @@ func RunValid(b *optics.Bench) *optics.Report {
 
 // runArms is RunValid over arms that the caller has resolved (the tests build some by hand).
 func runArms(b *optics.Bench, arms []optics.Arm) *optics.Report {
+	r, _ := runArmsContext(context.Background(), b, arms) // a context never done: no error
+	return r
+}
+
+// runArmsContext is runArms that stops with the EDeadline error once ctx is done.
+func runArmsContext(ctx context.Context, b *optics.Bench, arms []optics.Arm) (*optics.Report, error) {
 	full := make([]*optics.Report, len(arms))
 	for i := range arms {
-		full[i] = linear(arms[i].Bench, i == 0, len(arms) == 1)
+		var err error
+		if full[i], err = linear(ctx, arms[i].Bench, i == 0, len(arms) == 1); err != nil {
+			return nil, err
+		}
 	}
 	r := full[0]
 	r.ArmFull = full
@@ -48,13 +59,13 @@ func runArms(b *optics.Bench, arms []optics.Arm) *optics.Report {
 	r.Coupling = armCouplings(arms, full)
 	r.Warnings = append(r.Warnings, armWarnings(arms, r)...)
 	r.Board.Arms = boardArms(arms, r)
-	return r
+	return r, nil
 }
 
 // linear computes the report of one linear bench: a bench that does not branch, or one arm's.
 // The spacing tolerances, costly and about the main line, are computed only when main is set; the
 // placement and layout checks only when plan is (a branching bench runs them over all its arms).
-func linear(b *optics.Bench, main, plan bool) *optics.Report {
+func linear(ctx context.Context, b *optics.Bench, main, plan bool) (*optics.Report, error) {
 	p := optics.BuildPath(b)
 	r := &optics.Report{
 		Format:        optics.FormatReportV1,
@@ -68,7 +79,10 @@ func linear(b *optics.Bench, main, plan bool) *optics.Report {
 	sag := paraxial.Analyze(b, p, 0, paraxial.Sagittal)
 	r.System = systemValues(p, tan.Values, sag.Values)
 	if main {
-		r.Spacing, r.SpacingBasis = SpacingTolerances(b, p, tan)
+		var err error
+		if r.Spacing, r.SpacingBasis, err = spacingTolerances(ctx, b, p, tan); err != nil {
+			return nil, err
+		}
 	}
 	for k := range b.WavelengthsNM {
 		r.Chromatic = append(r.Chromatic, paraxial.Cardinals(p, k, paraxial.Tangential, &b.Source))
@@ -77,7 +91,10 @@ func linear(b *optics.Bench, main, plan bool) *optics.Report {
 	r.Elements = layout.Walk(b)
 	fillElements(r.Elements, b, p, tan)
 	var rayWarnings []optics.Warning
-	r.Rays, rayWarnings = traceRays(b, p, r.Elements, tan)
+	var err error
+	if r.Rays, rayWarnings, err = traceRays(ctx, b, p, r.Elements, tan); err != nil {
+		return nil, err
+	}
 	r.Warnings = append(r.Warnings, rayWarnings...)
 
 	var beamWarnings []optics.Warning
@@ -98,7 +115,7 @@ func linear(b *optics.Bench, main, plan bool) *optics.Report {
 	r.Warnings = append(r.Warnings, screenWarnings(b, r)...)
 	r.Warnings = append(r.Warnings, afterDumpWarnings(b)...)
 	r.Blur = blurs(b, r)
-	return r
+	return r, nil
 }
 
 // systemValues combines the two planes and says where the optical part starts and ends.

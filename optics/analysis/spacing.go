@@ -1,6 +1,7 @@
 package analysis
 
 import (
+	"context"
 	"math"
 	"slices"
 
@@ -29,6 +30,13 @@ const noiseRel = 1e-12
 // are shifted instead of rebuilding the path, and then recomputed: two recomputations per element. Elements after the first dump receive no light
 // and get no row.
 func SpacingTolerances(b *optics.Bench, p *optics.Path, tan paraxial.Result) ([]optics.SpacingTolerance, optics.SpacingBasis) {
+	rows, basis, _ := spacingTolerances(context.Background(), b, p, tan) // never done: no error
+	return rows, basis
+}
+
+// spacingTolerances is SpacingTolerances that stops with the EDeadline error once ctx is done,
+// checked before each element's pair of steps.
+func spacingTolerances(ctx context.Context, b *optics.Bench, p *optics.Path, tan paraxial.Result) ([]optics.SpacingTolerance, optics.SpacingBasis, error) {
 	rows := []optics.SpacingTolerance{}
 	basis := optics.SpacingBasis{Kind: optics.SpacingNone}
 	if len(b.WavelengthsNM) > 0 {
@@ -36,7 +44,7 @@ func SpacingTolerances(b *optics.Bench, p *optics.Path, tan paraxial.Result) ([]
 	}
 	_, last, ok := p.OpticalRange()
 	if !ok || len(b.Elements) == 0 || len(b.WavelengthsNM) == 0 {
-		return rows, basis
+		return rows, basis, nil
 	}
 	ref := referenceElement(b)
 	basis.Reference = b.Elements[ref].ID
@@ -86,6 +94,9 @@ func SpacingTolerances(b *optics.Bench, p *optics.Path, tan paraxial.Result) ([]
 	}
 	s.trace = make([]paraxial.Ray, len(p.Surfaces))
 	for i := 0; i <= ref; i++ {
+		if err := deadlineErr(ctx); err != nil {
+			return nil, basis, err
+		}
 		gap := b.Elements[i].GapMM
 		shift(p.Spans[i].First, SpacingStepMM)
 		plus := s.measure(&work)
@@ -119,7 +130,7 @@ func SpacingTolerances(b *optics.Bench, p *optics.Path, tan paraxial.Result) ([]
 		}
 		rows = append(rows, row)
 	}
-	return rows, basis
+	return rows, basis, nil
 }
 
 // beamBasis sets the tolerances' allowance from the source's Gaussian beam, when it has one that
