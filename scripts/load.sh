@@ -15,6 +15,7 @@ CONNECTIONS=${CONNECTIONS:-64}
 THREADS=${THREADS:-2}
 SLOW=${SLOW:-30}            # seconds each slow client trickles its body
 SLOW_CLIENTS=${SLOW_CLIENTS:-8}
+TIMEOUT=${TIMEOUT:-10}      # seconds before wrk counts a request as an error (its default, 2 s, is below p99 on a busy two-core machine)
 
 command -v wrk >/dev/null || { echo "load.sh: wrk is not installed" >&2; exit 1; }
 work=$(mktemp -d)
@@ -59,7 +60,7 @@ echo "server $base (pid $server_pid), revisions: ${ids[*]}"
 echo "RSS before        $(rss)"
 "$work/loadtool" slow "$base" "$SLOW" "$SLOW_CLIENTS" >"$work/slow.out" 2>&1 &
 slow_pid=$!
-RT_IDS="${ids[*]}" RT_FORMS="$work/forms" wrk -t "$THREADS" -c "$CONNECTIONS" -d "${DURATION}s" --latency \
+RT_IDS="${ids[*]}" RT_FORMS="$work/forms" wrk -t "$THREADS" -c "$CONNECTIONS" -d "${DURATION}s" --timeout "${TIMEOUT}s" --latency \
 	-s scripts/load.lua "$base" >"$work/wrk.out"
 slow_status=0
 wait "$slow_pid" || slow_status=$?
