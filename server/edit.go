@@ -8,6 +8,7 @@ import (
 	"strings"
 
 	"raytable/optics"
+	"raytable/optics/analysis"
 	"raytable/server/store"
 	"raytable/web/view"
 )
@@ -65,6 +66,9 @@ func utf8Start(c byte) bool { return c&0xC0 != 0x80 }
 // its one encoding (optics.EncodeValid); the store keeps those bytes as they are, and loadID
 // relies on this being the only way a revision is written.
 func (s *Server) storeBench(b *optics.Bench, data []byte, parent *design, start string) (store.Revision, error) {
+	if err := analysis.CheckBudget(b); err != nil {
+		return store.Revision{}, err // a design that could not be shown is not stored
+	}
 	id, err := store.NewID(s.random)
 	if err != nil {
 		return store.Revision{}, err

@@ -24,6 +24,16 @@ func RunContext(ctx context.Context, b *optics.Bench) (*optics.Report, error) {
 	return runArmsContext(ctx, b, arms)
 }
 
+// CheckBudget refuses a bench whose report would exceed the work budget, with the error
+// RunContext gives it. The server calls it before storing a bench, so that nothing is stored that
+// could not be shown (README, 'Limits and who can see what').
+func CheckBudget(b *optics.Bench) error {
+	if n := RayFaces(b); n > optics.MaxRayFaces {
+		return overBudget(n)
+	}
+	return nil
+}
+
 // RayFaces estimates the work of b's report: the exact rays of every arm (each with its
 // paraxial twin) times the faces of that arm's path, summed over the arms. Each ray-face is a
 // trace step, a hit in the report and its JSON and a point of the drawings.
