@@ -88,10 +88,10 @@ func TestFormKeepsHostileMaterialNames(t *testing.T) {
 	}
 }
 
-// TestFormKeepsEveryRay: a title edit of a bench with more explicit rays than any former cap
-// stores every ray.
+// TestFormKeepsEveryRay: a title edit of a bench with as many explicit rays as the cap allows
+// stores every ray (the form has no cap of its own).
 func TestFormKeepsEveryRay(t *testing.T) {
-	const rays = 1500
+	const rays = optics.MaxExplicitRays
 	ts := newTestServer(t)
 	id := redirectID(t, ts.do(t, http.MethodPost, "/import", bytes.NewReader(withRays(t, rays)), "application/json"))
 	vals := ts.pageForm(t, id)
