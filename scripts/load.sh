@@ -29,7 +29,8 @@ trap cleanup EXIT
 go build -o "$work/raytable" ./cmd/raytable
 go build -o "$work/loadtool" ./scripts/loadtool
 
-"$work/raytable" serve --addr 127.0.0.1:0 --store "$work/store.db" >"$work/server.out" 2>"$work/server.err" &
+# No write limit: this measures throughput; the limit itself has its tests (server/mw_rate_test.go).
+"$work/raytable" serve --addr 127.0.0.1:0 --store "$work/store.db" --writes-per-minute 0 >"$work/server.out" 2>"$work/server.err" &
 server_pid=$!
 base=""
 for _ in $(seq 100); do
