@@ -46,16 +46,11 @@ func intersectCylinder(p0, d r3.Vec, c float64, across r3.Vec) (r3.Vec, missKind
 	if f == 0 {
 		return t, hitOK
 	}
-	g := d.Z - c*r3.Dot(tm, dm)
-	disc := g*g - c*r3.Dot(dm, dm)*f
-	if disc < 0 {
+	s, ok := nearerRoot(c*r3.Dot(dm, dm), d.Z-c*r3.Dot(tm, dm), f)
+	if !ok {
 		return r3.Vec{}, missSphere
 	}
-	den := g + math.Copysign(math.Sqrt(disc), g)
-	if den == 0 {
-		return r3.Vec{}, missSphere
-	}
-	p := r3.Add(t, r3.Scale(f/den, d))
+	p := r3.Add(t, r3.Scale(s, d))
 	if 1-c*p.Z <= 0 {
 		return r3.Vec{}, missRim
 	}

@@ -40,16 +40,11 @@ func intersect(p0, d, a r3.Vec, c float64) (r3.Vec, missKind) {
 	if f == 0 {
 		return t, hitOK // at the vertex itself
 	}
-	g := da - c*r3.Dot(t, d)
-	disc := g*g - c*f
-	if disc < 0 {
+	s, ok := nearerRoot(c, da-c*r3.Dot(t, d), f)
+	if !ok {
 		return r3.Vec{}, missSphere
 	}
-	den := g + math.Copysign(math.Sqrt(disc), g)
-	if den == 0 {
-		return r3.Vec{}, missSphere
-	}
-	p := r3.Add(t, r3.Scale(f/den, d))
+	p := r3.Add(t, r3.Scale(s, d))
 	if 1-c*r3.Dot(p, a) <= 0 {
 		return r3.Vec{}, missRim
 	}
@@ -99,4 +94,19 @@ func mirrorNormal(turnRad float64) r3.Vec {
 		return r3.Vec{X: 0, Y: 0, Z: -1}
 	}
 	return r3.Scale(1/n, v)
+}
+
+// nearerRoot is the root of a·s² - 2g·s + f = 0 on the vertex side, in the form
+// s = f / (g + sign(g)·sqrt(g² - a·f)) that stays finite as a -> 0 (Spencer and Murty 1962; see
+// intersect). ok is false when the line misses the surface.
+func nearerRoot(a, g, f float64) (s float64, ok bool) {
+	disc := g*g - a*f
+	if disc < 0 {
+		return 0, false
+	}
+	den := g + math.Copysign(math.Sqrt(disc), g)
+	if den == 0 {
+		return 0, false
+	}
+	return f / den, true
 }
