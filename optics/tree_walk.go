@@ -190,18 +190,9 @@ func listWavelengths(b *Bench, l elementList) []float64 {
 // fraction, or for a dichroic wholly to the port its side of the edge goes to.
 func splitPower(s *Element, in []float64, wavelengths []float64) (transmitted, reflected []float64) {
 	transmitted, reflected = make([]float64, len(in)), make([]float64, len(in))
-	for k, p := range in {
-		r := DefaultReflect
-		if s.Reflect != nil {
-			r = *s.Reflect
-		}
-		if d := s.Dichroic; d != nil && k < len(wavelengths) {
-			r = 0
-			if (d.Reflects == ReflectsShorter) == (wavelengths[k] < d.EdgeNM) {
-				r = 1
-			}
-		}
-		transmitted[k], reflected[k] = p*(1-r), p*r
+	for k := range min(len(in), len(wavelengths)) { // one power per wavelength, in the same order
+		r := s.ReflectedShare(wavelengths[k])
+		transmitted[k], reflected[k] = in[k]*(1-r), in[k]*r
 	}
 	return transmitted, reflected
 }

@@ -90,27 +90,9 @@ func armEnd(a optics.Arm) string {
 func endPower(a optics.Arm) float64 {
 	f := a.PowerFraction
 	for _, e := range a.Bench.Elements[min(a.Own, len(a.Bench.Elements)):] {
-		if e.Type == optics.TypeSplitter {
-			f *= 1 - reflectedShare(e, a.Bench.WavelengthsNM)
+		if e.Type == optics.TypeSplitter && len(a.Bench.WavelengthsNM) > 0 {
+			f *= 1 - e.ReflectedShare(a.Bench.WavelengthsNM[0])
 		}
 	}
 	return f
-}
-
-// reflectedShare is the fraction a splitter reflects at the primary wavelength.
-func reflectedShare(e optics.Element, wavelengthsNM []float64) float64 {
-	if d := e.Dichroic; d != nil {
-		if len(wavelengthsNM) == 0 {
-			return 0
-		}
-		w := wavelengthsNM[0]
-		if (d.Reflects == optics.ReflectsShorter) == (w < d.EdgeNM) {
-			return 1
-		}
-		return 0
-	}
-	if e.Reflect != nil {
-		return *e.Reflect
-	}
-	return optics.DefaultReflect
 }
