@@ -244,11 +244,6 @@ type Mount struct {
 	DepthMM float64 `json:"depth_mm"`
 }
 
-// IsOptical reports whether the element bends light (lens, thin lens, mirror).
-func (e *Element) IsOptical() bool {
-	return e.Type == TypeLens || e.Type == TypeThinLens || e.Type == TypeMirror
-}
-
 // LengthMM is the distance from the element's first vertex to its last along the beam.
 func (e *Element) LengthMM() float64 {
 	var t float64

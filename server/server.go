@@ -25,8 +25,6 @@ type Store interface {
 	Put(rev store.Revision) error
 	// Get returns a revision, or an error with code optics.ENotFound.
 	Get(id string) (store.Revision, error)
-	// Recent returns up to n revisions, newest first.
-	Recent(n int) ([]store.Revision, error)
 }
 
 // Config is what a Server needs. Store is required; the rest have defaults.
