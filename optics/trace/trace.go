@@ -84,38 +84,14 @@ func Trace(p *optics.Path, k int, s Start, buf []Point) Result {
 			pos, dir = out, d
 
 		case optics.Refracting:
-			if sf.TiltRad != 0 || sf.AxisTurnRad != 0 {
-				hit, d, r, miss, ok := tiltedFace(p0, dir, sf, side, p.IndexBefore(i, k), sf.Index[k])
-				switch {
-				case miss != hitOK:
-					return stop(optics.RayMissed, missReason(sf, miss))
-				case r > sf.SemiAperture:
-					pts = append(pts, Point{Surface: i, Pos: hit, Dir: dir, RimMM: r})
-					return stop(optics.RayClipped, clipReason(sf, r))
-				case !ok:
-					pts = append(pts, Point{Surface: i, Pos: hit, Dir: dir, RimMM: r})
-					return stop(optics.RayTIR, "total internal reflection at "+where(sf))
-				}
-				pts = append(pts, Point{Surface: i, Pos: hit, Dir: d, RimMM: r})
-				if d.Z <= 0 {
-					return stop(optics.RayMissed, "the ray leaves "+where(sf)+" backwards, against the path")
-				}
-				pos, dir = hit, d
-				continue
-			}
-			axis := r3.Vec{X: 0, Y: 0, Z: 1}
-			across := acrossCylinder(sf.CylinderAxis)
-			hit, miss := intersectCylinder(p0, dir, sf.Curvature, across)
-			if miss != hitOK {
+			hit, d, r, miss, ok := refractAt(p0, dir, sf, side, p.IndexBefore(i, k), sf.Index[k])
+			switch {
+			case miss != hitOK:
 				return stop(optics.RayMissed, missReason(sf, miss))
-			}
-			r := math.Hypot(hit.X, hit.Y)
-			if r > sf.SemiAperture {
+			case r > sf.SemiAperture:
 				pts = append(pts, Point{Surface: i, Pos: hit, Dir: dir, RimMM: r})
 				return stop(optics.RayClipped, clipReason(sf, r))
-			}
-			d, ok := refract(dir, normal(r3.Vec{X: hit.X * across.X, Y: hit.Y * across.Y, Z: hit.Z}, axis, sf.Curvature), p.IndexBefore(i, k), sf.Index[k])
-			if !ok {
+			case !ok:
 				pts = append(pts, Point{Surface: i, Pos: hit, Dir: dir, RimMM: r})
 				return stop(optics.RayTIR, "total internal reflection at "+where(sf))
 			}
@@ -187,4 +163,23 @@ func missReason(s *optics.Surface, m missKind) string {
 	default:
 		return fmt.Sprintf("the ray meets the sphere of %s (radius %.2f mm) only beyond its rim", where(s), 1/s.Curvature)
 	}
+}
+
+// refractAt meets and refracts at a refracting face: a tilted flat face of a plate (tiltedFace),
+// or a sphere or cylinder square to the axis. It gives the hit in the face's vertex frame, the
+// leaving direction, the distance from the axis the clear aperture is judged by, why the ray
+// missed, and ok=false for total internal reflection. The caller judges a miss, then the clear
+// aperture, then the reflection, in that order.
+func refractAt(p0, dir r3.Vec, sf *optics.Surface, side, n1, n2 float64) (hit, d r3.Vec, r float64, miss missKind, ok bool) {
+	if sf.TiltRad != 0 || sf.AxisTurnRad != 0 {
+		return tiltedFace(p0, dir, sf, side, n1, n2)
+	}
+	across := acrossCylinder(sf.CylinderAxis)
+	hit, miss = intersectCylinder(p0, dir, sf.Curvature, across)
+	if miss != hitOK {
+		return hit, dir, 0, miss, false
+	}
+	r = math.Hypot(hit.X, hit.Y)
+	d, ok = refract(dir, normal(r3.Vec{X: hit.X * across.X, Y: hit.Y * across.Y, Z: hit.Z}, r3.Vec{X: 0, Y: 0, Z: 1}, sf.Curvature), n1, n2)
+	return hit, d, r, hitOK, ok
 }
